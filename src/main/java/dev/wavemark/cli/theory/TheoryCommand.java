@@ -18,6 +18,8 @@ import picocli.CommandLine.Command;
         MachAngleCommand.class,
         PrandtlMeyerCommand.class,
         ObliqueShockCommand.class,
+        ConeCommand.class,
+        StandoffCommand.class,
     })
 public final class TheoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
