@@ -20,6 +20,9 @@ import picocli.CommandLine.Command;
         ObliqueShockCommand.class,
         ConeCommand.class,
         StandoffCommand.class,
+        ShockExpansionCommand.class,
+        ReflectionCommand.class,
+        IntersectionCommand.class,
     })
 public final class TheoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
