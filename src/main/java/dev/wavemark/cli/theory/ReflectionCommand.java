@@ -70,8 +70,9 @@ final class ReflectionCommand extends Relation {
     Values v = withMach ? new Values().put("mach", "M1", m) : new Values();
     v.putDeg("detachmentIncidentDeg", "detachment: incident shock angle (deg)", d.incidentAngleRad())
         .putDeg("detachmentThetaDeg", "detachment: generator deflection (deg)", d.deflectionRad());
-    if (m > ShockReflection.dualSolutionThresholdMach(gamma)) {
-      ShockReflection.Criterion n = ShockReflection.vonNeumann(m, gamma);
+    java.util.Optional<ShockReflection.Criterion> vn = ShockReflection.vonNeumannIfAny(m, gamma);
+    if (vn.isPresent()) {
+      ShockReflection.Criterion n = vn.get();
       v.putDeg("vonNeumannIncidentDeg", "von Neumann: incident shock angle (deg)", n.incidentAngleRad())
           .putDeg("vonNeumannThetaDeg", "von Neumann: generator deflection (deg)", n.deflectionRad());
     } else {
