@@ -44,6 +44,8 @@ public final class ShockReflection {
    */
   public record Regular(double m1, double thetaRad, Turn incident, Turn reflected, double reflectedAngleToWallRad) {
     public Regular {
+      Checks.supersonic(m1, "a regular reflection");
+      Checks.finite("deflection (rad)", thetaRad);
       Checks.finite("reflected shock angle to the wall (rad)", reflectedAngleToWallRad);
     }
 
@@ -81,6 +83,8 @@ public final class ShockReflection {
    */
   public record Criterion(double m1, double gamma, double incidentAngleRad, double deflectionRad) {
     public Criterion {
+      Checks.supersonic(m1, "a reflection criterion");
+      Gas.check(gamma);
       Checks.finite("incident shock angle (rad)", incidentAngleRad);
       Checks.finite("deflection (rad)", deflectionRad);
     }
@@ -93,7 +97,14 @@ public final class ShockReflection {
    *     von Neumann condition has no solution short of detachment
    */
   public record Judgement(
-      ReflectionVerdict verdict, double detachmentDeflectionRad, OptionalDouble vonNeumannDeflectionRad) {}
+      ReflectionVerdict verdict, double detachmentDeflectionRad, OptionalDouble vonNeumannDeflectionRad) {
+    public Judgement {
+      Checks.finite("detachment deflection (rad)", detachmentDeflectionRad);
+      if (vonNeumannDeflectionRad.isPresent()) {
+        Checks.finite("von Neumann deflection (rad)", vonNeumannDeflectionRad.getAsDouble());
+      }
+    }
+  }
 
   /**
    * The regular reflection for deflection theta in M1.
