@@ -134,4 +134,15 @@ class WavePatternTest {
     assertEquals(sf.mergedDirectionRad(), find(ws, "merged shock").directionRad(), 1e-12);
     assertEquals(find(ws, "first ramp shock").endPx().x(), find(ws, "merged shock").startPx().x(), 1e-9);
   }
+
+  @Test
+  void coneShockIsTheTaylorMaccollShock() {
+    BodyShape c = new BodyShape.Cone(Math.toRadians(15), 0, new Point2(150, 240), 150);
+    List<ExpectedWave> ws = WavePattern.of(c, 2.5, G, 0, 640, 480);
+    double beta = dev.wavemark.core.gas.ConicalFlow.of(G).shockAngle(2.5, Math.toRadians(15));
+    assertTrue(beta > Math.toRadians(15) && beta < ObliqueShock.beta(2.5, Math.toRadians(15), ShockBranch.WEAK, G),
+        "a cone's shock lies between its surface and the shock of a wedge of the same angle (fact of the trade)");
+    assertEquals(beta, find(ws, "upper conical shock").angleToFlowRad(), 1e-12);
+    assertEquals(-beta, find(ws, "lower conical shock").directionRad(), 1e-12);
+  }
 }
