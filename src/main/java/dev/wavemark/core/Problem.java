@@ -31,7 +31,9 @@ public enum Problem {
   MASK_OUTSIDE("mask-outside", "%s: %s lies outside the %s picture"),
   NO_WAVE_FOUND("no-wave-found", "%s: no %s found; %s"),
   WRITE_FAILED("write-failed", "%s: cannot be written (%s)"),
-  BAD_ARGUMENT("bad-argument", "%s");
+  BAD_ARGUMENT("bad-argument", "%s"),
+  // Calibration
+  TARGET_NOT_FOUND("target-not-found", "%s: no %s found; %s");
 
   private final String code;
   private final String pattern;
