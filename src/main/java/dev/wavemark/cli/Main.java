@@ -25,7 +25,7 @@ public final class Main implements Runnable {
    * The subcommands, in help order. Each capability adds its command here.
    */
   static Object[] subcommands() {
-    return new Object[] {};
+    return new Object[] {new dev.wavemark.cli.theory.TheoryCommand()};
   }
 
   /** Builds the configured command line; tests call this with their own writers. */

@@ -31,7 +31,10 @@ public enum Problem {
   MASK_OUTSIDE("mask-outside", "%s: %s lies outside the %s picture"),
   NO_WAVE_FOUND("no-wave-found", "%s: no %s found; %s"),
   WRITE_FAILED("write-failed", "%s: cannot be written (%s)"),
-  BAD_ARGUMENT("bad-argument", "%s");
+  BAD_ARGUMENT("bad-argument", "%s"),
+  // Pipeline
+  FRAME_FAILED("frame-failed", "%s: analysis failed unexpectedly (%s); please report this with the frame"),
+  SAMPLES_MISSING("samples-missing", "%s: no sample run files (*.run.json) found; run demo from the wavemark folder or pass --samples DIR");
 
   private final String code;
   private final String pattern;

@@ -31,10 +31,33 @@ public final class ObliqueShock {
       throw new WavemarkException(Problem.BELOW_MACH_ANGLE, WavemarkException.deg(betaRad), WavemarkException.deg(mu), WavemarkException.num(m));
     }
     Checks.inClosed("shock angle (rad)", betaRad, 0, 0.5 * Math.PI);
+    return thetaUnchecked(m, betaRad, gamma);
+  }
+
+  /** NACA 1135 eq. 138 without argument checks, for arguments already validated. */
+  static double thetaUnchecked(double m, double betaRad, double gamma) {
     double s = Math.sin(betaRad);
-    double num = 2 * (m * m * s * s - 1) * Math.cos(betaRad);
-    double den = s * (m * m * (gamma + Math.cos(2 * betaRad)) + 2);
+    double c = Math.cos(betaRad);
+    double m2 = m * m;
+    double num = 2 * (m2 * s * s - 1) * c;
+    double den = s * (m2 * (gamma + c * c - s * s) + 2);
     return Math.atan2(Math.max(0, num), den);
+  }
+
+  /**
+   * d theta / d beta at fixed M, in rad/rad: the derivative of eq. 138 written as
+   * theta = atan2(N, D) with N = 2 (M^2 sin^2 beta - 1) cos beta, D = sin beta (M^2 (gamma + cos 2beta) + 2).
+   * Zero at the maximum deflection; used for Newton steps and for propagating uncertainty.
+   */
+  public static double dThetaDBeta(double m, double betaRad, double gamma) {
+    double s = Math.sin(betaRad);
+    double c = Math.cos(betaRad);
+    double m2 = m * m;
+    double n = 2 * (m2 * s * s - 1) * c;
+    double d = s * (m2 * (gamma + c * c - s * s) + 2);
+    double dn = 2 * s * (2 * m2 * c * c - m2 * s * s + 1);
+    double dd = c * (m2 * (gamma + c * c - s * s) + 2) - 4 * m2 * s * s * c;
+    return (dn * d - n * dd) / (n * n + d * d);
   }
 
   /**
@@ -68,7 +91,37 @@ public final class ObliqueShock {
     chi = Math.max(-1, Math.min(1, chi));
     double delta = branch == ShockBranch.WEAK ? 1 : 0;
     double tanBeta = (m2 - 1 + 2 * lambda * Math.cos((4 * Math.PI * delta + Math.acos(chi)) / 3)) / (3 * a * t);
-    return Math.atan(tanBeta);
+    return polish(m, thetaRad, Math.atan(tanBeta), branch, gamma);
+  }
+
+  /**
+   * Newton steps on theta(M, beta) = theta from the explicit root. The explicit weak-branch
+   * formula subtracts nearly equal terms at small deflections (relative error ~ eps / theta^2),
+   * which the round trip M(beta(M, theta), theta) would show at high Mach numbers; two Newton
+   * steps restore full precision. Steps are capped and kept on the branch, because d theta /
+   * d beta vanishes at the maximum deflection.
+   */
+  private static double polish(double m, double theta, double beta, ShockBranch branch, double gamma) {
+    double star = Double.NaN;
+    for (int i = 0; i < 2; i++) {
+      double f = thetaUnchecked(m, beta, gamma) - theta;
+      double step = f / dThetaDBeta(m, beta, gamma);
+      if (!(Math.abs(step) < 1e-7)) {
+        break;
+      }
+      double next = beta - step;
+      if (Math.abs(step) > 1e-12) {
+        if (Double.isNaN(star)) {
+          star = betaAtMaxDeflection(m, gamma);
+        }
+        next = branch == ShockBranch.WEAK ? Math.min(next, star) : Math.max(next, star);
+      }
+      if (next == beta) {
+        break;
+      }
+      beta = next;
+    }
+    return beta;
   }
 
   /** The shock angle at the maximum deflection, in radians (NACA 1135 eq. 168). */
