@@ -32,6 +32,9 @@ public enum Problem {
   NO_WAVE_FOUND("no-wave-found", "%s: no %s found; %s"),
   WRITE_FAILED("write-failed", "%s: cannot be written (%s)"),
   BAD_ARGUMENT("bad-argument", "%s"),
+  // Pipeline
+  FRAME_FAILED("frame-failed", "%s: analysis failed unexpectedly (%s); please report this with the frame"),
+  SAMPLES_MISSING("samples-missing", "%s: no sample run files (*.run.json) found; run demo from the wavemark folder or pass --samples DIR"),
   // Calibration
   TARGET_NOT_FOUND("target-not-found", "%s: no %s found; %s");
 

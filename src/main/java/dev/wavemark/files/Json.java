@@ -70,4 +70,17 @@ public final class Json {
       throw new WavemarkException(Problem.WRITE_FAILED, file, e.getMessage());
     }
   }
+
+  /** As {@link #read(Path, Class, String)}, with a differently configured mapper. */
+  static <T> T read(Path file, Class<T> type, String what, ObjectMapper mapper) {
+    try {
+      return mapper.readValue(Files.readString(file), type);
+    } catch (NoSuchFileException e) {
+      throw new WavemarkException(Problem.FILE_MISSING, file, file.toAbsolutePath().getParent());
+    } catch (JsonProcessingException e) {
+      throw new WavemarkException(Problem.JSON_INVALID, file, "not a " + what + ": " + e.getOriginalMessage().split("\n")[0]);
+    } catch (IOException e) {
+      throw new WavemarkException(Problem.FILE_UNREADABLE, file, e.getMessage());
+    }
+  }
 }

@@ -1,0 +1,84 @@
+package dev.wavemark.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.wavemark.core.Problem;
+import dev.wavemark.core.WavemarkException;
+import dev.wavemark.files.ResultFile;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ReportTest {
+  @TempDir Path dir;
+
+  @Test
+  void writesEveryFileAndTheHtmlIsEscaped() throws Exception {
+    String label = "<script>alert('x')</script> & run \"7\"";
+    ResultFile r = Fixtures.result(label, List.of(Fixtures.frame(0, Fixtures.MACH, "frame-0001.png")));
+    Path html = Report.write(new Report.Input(r, Fixtures.WEDGE, 0, Map.of(0, Fixtures.picture()), null), dir);
+    String page = Files.readString(html);
+    assertFalse(page.contains("<script>"), "the label must come out inert");
+    assertTrue(page.contains("&lt;script&gt;alert("), "the label must be shown escaped");
+    assertTrue(Files.exists(dir.resolve("result.json")));
+    assertTrue(Files.exists(dir.resolve("result.csv")));
+    assertTrue(Files.exists(dir.resolve("pictures/frame-00000.png")));
+    assertTrue(page.contains("pictures/frame-00000.png"));
+    assertTrue(page.contains("<svg"), "the oblique-shock chart is inline SVG");
+    assertFalse(page.contains("http://") && page.contains("<link"), "no external stylesheet");
+    assertFalse(page.contains("<script"), "no scripts at all");
+    assertEquals(label, ResultFile.read(dir.resolve("result.json")).label());
+    try (Stream<Path> s = Files.walk(dir)) {
+      assertTrue(s.noneMatch(p -> p.getFileName().toString().endsWith(".part")), "no temporary file left behind");
+    }
+  }
+
+  @Test
+  void aSequenceGetsTheMachChartAndABoundedPictureSelection() throws Exception {
+    List<ResultFile.Frame> frames = new java.util.ArrayList<>();
+    for (int i = 0; i < 30; i++) {
+      frames.add(Fixtures.frame(i, 1.98 + 0.001 * i, String.format("seq.tif#%d", i + 1)));
+    }
+    frames.set(7, Fixtures.failed(7, "seq.tif#8", "image-corrupt", "seq.tif#8: not a readable image (bad strip)"));
+    Map<Integer, Picture> pics = new java.util.HashMap<>();
+    for (int i : FrameSelection.evenly(30, FrameSelection.MAX_PICTURES)) {
+      pics.put(i, Fixtures.picture());
+    }
+    Path html = Report.write(new Report.Input(Fixtures.result("sequence", frames), Fixtures.WEDGE, 0, pics, "../index.html"), dir);
+    String page = Files.readString(html);
+    assertTrue(page.contains("Mach number against frame"));
+    assertTrue(page.contains("image-corrupt"), "the failed frame is listed with its code");
+    try (Stream<Path> s = Files.list(dir.resolve("pictures"))) {
+      assertEquals(FrameSelection.MAX_PICTURES, s.count());
+    }
+  }
+
+  @Test
+  void anInterruptedWriteLeavesNoReportPage() throws Exception {
+    ResultFile r = Fixtures.result("ok", List.of(Fixtures.frame(0, Fixtures.MACH, "frame-0001.png")));
+    Report.write(new Report.Input(r, Fixtures.WEDGE, 0, Map.of(), null), dir);
+    assertTrue(Files.exists(dir.resolve("report.html")));
+    // A second run whose pictures cannot be written (a file stands where the folder must go).
+    Files.writeString(dir.resolve("pictures"), "not a folder");
+    WavemarkException e = assertThrows(WavemarkException.class,
+        () -> Report.write(new Report.Input(r, Fixtures.WEDGE, 0, Map.of(0, Fixtures.picture()), null), dir));
+    assertEquals(Problem.WRITE_FAILED, e.problem());
+    assertFalse(Files.exists(dir.resolve("report.html")), "the old page must not pass for the new run's");
+  }
+
+  @Test
+  void evenSelectionKeepsFirstAndLast() {
+    assertEquals(List.of(0, 1, 2), FrameSelection.evenly(3, 8));
+    List<Integer> s = FrameSelection.evenly(10_000, 8);
+    assertEquals(8, s.size());
+    assertEquals(0, s.get(0));
+    assertEquals(9_999, s.get(7));
+  }
+}
