@@ -1,6 +1,7 @@
 package dev.wavemark.inference;
 
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.ConicalFlow;
 import dev.wavemark.core.gas.ObliqueShock;
 import dev.wavemark.core.gas.ShockBranch;
 import dev.wavemark.core.geom.ImageAngles;
@@ -319,7 +320,7 @@ final class FrameAnalysis {
       double max;
       double mLocal = m;
       if (s.conical()) {
-        continue; // judged once the conical detachment limit is available in core.gas
+        max = ConicalFlow.of(gamma).maxConeAngle(m).coneRad();
       } else if (Double.isFinite(s.behindFirstShockOf())) {
         if (s.behindFirstShockOf() > ObliqueShock.maxDeflection(m, gamma)) {
           continue; // the first ramp already detaches; reported on its own
