@@ -153,7 +153,7 @@ final class FrameAnalysis {
       List<String> now = keys(found, exp.get());
       Estimators.Built built = estimators.build(m, exp.get(), found);
       Optional<Combiner.Combined> c = Combiner.combine(built.estimates(), this::sigma, options.testLevel(),
-          options.disagreementSigma(), options.scaleByBirgeRatio(), new Describe());
+          options.scaleByBirgeRatio(), new Describe());
       inversionWarnings = built.warnings();
       pairs = found;
       if (c.isEmpty()) {

@@ -1,0 +1,268 @@
+package dev.wavemark.imaging.detect;
+
+/**
+ * The candidate stage: the mean of a reduced-resolution frame along each ray of a pencil from
+ * a point where waves start (a Hough transform restricted to the lines through one point, which
+ * is what the model geometry allows). A wave through the point shows in this angular profile
+ * with the same signature it has across its line: a peak, a step or a dark-bright pair.
+ * BoofCV's Hough detectors search all lines of the picture, which costs more and resolves the
+ * angle worse than this one-parameter search.
+ */
+final class AngularScan {
+  final double ox;
+  final double oy;
+  final double a0;
+  final double step;
+  final double[] mean;
+  /** For each angle, the largest radius (frame px) at which the ray is still in the flow. */
+  final double[] reach;
+  final double rMin;
+
+  private AngularScan(double ox, double oy, double a0, double step, double[] mean, double[] reach, double rMin) {
+    this.ox = ox;
+    this.oy = oy;
+    this.a0 = a0;
+    this.step = step;
+    this.mean = mean;
+    this.reach = reach;
+    this.rMin = rMin;
+  }
+
+  double angle(double index) {
+    return a0 + index * step;
+  }
+
+  /**
+   * Scans directions a0..a1 (contract sense, radians, a1 &gt; a0) from (ox, oy) (frame px).
+   *
+   * @param low the reduced frame
+   * @param rMin first radius used, frame px (the corner itself is unreliable)
+   * @param rMax last radius used, frame px
+   */
+  static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax) {
+    int k = low.scale;
+    double rTyp = Math.max(rMin + 20, Math.min(rMax, 400));
+    double step = Math.max(Math.toRadians(0.05), Math.min(Math.toRadians(0.5), 0.5 * k / rTyp));
+    int n = (int) Math.ceil((a1 - a0) / step) + 1;
+    double[] mean = new double[n];
+    double[] reach = new double[n];
+    double off = 0.5 * (k - 1);
+    double lx0 = (ox - off) / k;
+    double ly0 = (oy - off) / k;
+    double rs = rMin / k;
+    double re = rMax / k;
+    for (int i = 0; i < n; i++) {
+      double a = a0 + i * step;
+      double ux = Math.cos(a);
+      double uy = -Math.sin(a);
+      double sum = 0;
+      int cnt = 0;
+      double last = 0;
+      int misses = 0;
+      for (double r = rs; r <= re; r += 1.0) {
+        double v = low.sample(lx0 + r * ux, ly0 + r * uy);
+        if (Double.isNaN(v)) {
+          if (cnt > 0 && ++misses > 6) {
+            break;
+          }
+          continue;
+        }
+        misses = 0;
+        sum += v;
+        cnt++;
+        last = r;
+      }
+      mean[i] = cnt >= 8 ? sum / cnt : Double.NaN;
+      reach[i] = last * k;
+    }
+    return new AngularScan(ox, oy, a0, step, mean, reach, rMin);
+  }
+
+  /** Robust noise of the profile: the MAD of its first differences, over sqrt 2. */
+  double noise() {
+    double[] d = new double[mean.length];
+    int m = 0;
+    for (int i = 1; i < mean.length; i++) {
+      if (!Double.isNaN(mean[i]) && !Double.isNaN(mean[i - 1])) {
+        d[m++] = mean[i] - mean[i - 1];
+      }
+    }
+    return Math.max(1e-12, 1.4826 * LineFit.medianAbs(java.util.Arrays.copyOf(d, m)) / Math.sqrt(2));
+  }
+
+  private double at(int i) {
+    return i < 0 || i >= mean.length || Double.isNaN(mean[i]) ? 0 : mean[i];
+  }
+
+  /** A found candidate direction (fractional index) with its strength and sign. */
+  record Hit(double index, double strength, int sign, double widthIndex) {}
+
+  /**
+   * The strongest thin line: the largest |mean| (schlieren: a peak), refined as the midpoint of
+   * its half-height crossings. Returns null if nothing exceeds {@code minSnr} noise deviations.
+   */
+  Hit strongestLine(double minSnr, double maxWidthIndex) {
+    double sigma = noise();
+    int best = -1;
+    double bv = 0;
+    for (int i = 1; i < mean.length - 1; i++) {
+      double v = Math.abs(at(i));
+      if (v > bv && isNarrow(i, maxWidthIndex)) {
+        bv = v;
+        best = i;
+      }
+    }
+    if (best < 0 || bv < minSnr * sigma) {
+      return null;
+    }
+    int sign = at(best) >= 0 ? 1 : -1;
+    double[] q = new double[mean.length];
+    for (int i = 0; i < q.length; i++) {
+      q[i] = sign * at(i);
+    }
+    Profiles.Located l = Profiles.peak(q, 1, best, best);
+    double centre = l == null ? best : l.centre();
+    double width = l == null ? 1 : l.width();
+    return new Hit(centre, bv / sigma, sign, width);
+  }
+
+  private boolean isNarrow(int i, double maxWidthIndex) {
+    double v = Math.abs(at(i));
+    if (v == 0) {
+      return false;
+    }
+    int w = (int) Math.ceil(maxWidthIndex);
+    int lo = i;
+    while (lo > 0 && Math.abs(at(lo)) >= 0.5 * v && i - lo <= w) {
+      lo--;
+    }
+    int hi = i;
+    while (hi < mean.length - 1 && Math.abs(at(hi)) >= 0.5 * v && hi - i <= w) {
+      hi++;
+    }
+    return hi - lo <= 2 * w && Math.abs(at(i)) >= Math.abs(at(i - 1)) && Math.abs(at(i)) >= Math.abs(at(i + 1));
+  }
+
+  /**
+   * The strongest dark-bright pair (shadowgraph shock): the largest lobe-to-lobe difference
+   * between extrema of opposite sign within {@code maxSepIndex}; its zero crossing.
+   */
+  Hit strongestPair(double minSnr, int maxSepIndex) {
+    double sigma = noise();
+    double best = 0;
+    int bi = -1;
+    int bj = -1;
+    for (int i = 1; i < mean.length - 1; i++) {
+      if (!(at(i) > at(i - 1) && at(i) >= at(i + 1) && at(i) > 0)) {
+        continue;
+      }
+      for (int j = Math.max(0, i - maxSepIndex); j <= Math.min(mean.length - 1, i + maxSepIndex); j++) {
+        double d = at(i) - at(j);
+        if (at(j) < 0 && d > best && Math.min(at(i), -at(j)) > 0.25 * Math.max(at(i), -at(j))) {
+          best = d;
+          bi = i;
+          bj = j;
+        }
+      }
+    }
+    if (bi < 0 || 0.5 * best < minSnr * sigma) {
+      return null;
+    }
+    int a = Math.min(bi, bj);
+    int b = Math.max(bi, bj);
+    double[] q = new double[b - a + 1];
+    for (int i = a; i <= b; i++) {
+      q[i - a] = at(i);
+    }
+    Profiles.Located l = Profiles.zeroCrossing(q, 0, q.length - 1, q.length);
+    double centre = l == null ? 0.5 * (a + b) : a + l.centre();
+    return new Hit(centre, 0.5 * best / sigma, bj < bi ? 1 : -1, b - a);
+  }
+
+  /**
+   * The widest band of one sign (schlieren fan): the run of angles whose |mean| stays above
+   * half the run's median level; returns its two edges (head first in index order) or null.
+   */
+  Hit[] widestBand(double minSnr, double minWidthIndex) {
+    double sigma = noise();
+    double thr = minSnr * sigma;
+    Hit[] best = null;
+    double bestScore = 0;
+    int i = 0;
+    while (i < mean.length) {
+      if (Math.abs(at(i)) < thr) {
+        i++;
+        continue;
+      }
+      int sign = at(i) > 0 ? 1 : -1;
+      int j = i;
+      while (j + 1 < mean.length && sign * at(j + 1) >= thr) {
+        j++;
+      }
+      int width = j - i + 1;
+      // a band running into the end of the sector is a wave crossing the pencil, not a fan
+      boolean bounded = i > 0 && j < mean.length - 1;
+      if (width >= minWidthIndex && bounded) {
+        double[] vals = new double[width];
+        for (int k = i; k <= j; k++) {
+          vals[k - i] = sign * at(k);
+        }
+        double level = median(vals);
+        double half = 0.5 * level;
+        int mid = (i + j) / 2;
+        double left = edge(mid, -1, sign, half);
+        double right = edge(mid, +1, sign, half);
+        double score = level * (right - left);
+        if (score > bestScore) {
+          bestScore = score;
+          best = new Hit[] {new Hit(left, level / sigma, sign, right - left), new Hit(right, level / sigma, sign, right - left)};
+        }
+      }
+      i = j + 1;
+    }
+    return best;
+  }
+
+  /** Where sign*mean first falls below {@code half} walking from index {@code from} in direction {@code dir}. */
+  private double edge(int from, int dir, int sign, double half) {
+    int k = from;
+    while (k + dir >= 0 && k + dir < mean.length && sign * at(k + dir) >= half) {
+      k += dir;
+    }
+    if (k + dir < 0 || k + dir >= mean.length) {
+      return k;
+    }
+    double vi = sign * at(k);
+    double vo = sign * at(k + dir);
+    return k + dir * (vi - half) / Math.max(vi - vo, 1e-30);
+  }
+
+  /** The two strongest thin lines of opposite sign at least {@code minSepIndex} apart (shadowgraph fan). */
+  Hit[] oppositeLines(double minSnr, int minSepIndex, double maxWidthIndex) {
+    double sigma = noise();
+    Hit pos = null;
+    Hit neg = null;
+    for (int i = 1; i < mean.length - 1; i++) {
+      double v = at(i);
+      if (Math.abs(v) < minSnr * sigma || !isNarrow(i, maxWidthIndex)) {
+        continue;
+      }
+      Hit h = new Hit(i, Math.abs(v) / sigma, v > 0 ? 1 : -1, 1);
+      if (v > 0 && (pos == null || h.strength() > pos.strength())) {
+        pos = h;
+      } else if (v < 0 && (neg == null || h.strength() > neg.strength())) {
+        neg = h;
+      }
+    }
+    if (pos == null || neg == null || Math.abs(pos.index() - neg.index()) < minSepIndex) {
+      return null;
+    }
+    return pos.index() < neg.index() ? new Hit[] {pos, neg} : new Hit[] {neg, pos};
+  }
+
+  private static double median(double[] v) {
+    double[] a = v.clone();
+    java.util.Arrays.sort(a);
+    return a[a.length / 2];
+  }
+}

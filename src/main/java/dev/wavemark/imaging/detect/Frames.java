@@ -1,0 +1,108 @@
+package dev.wavemark.imaging.detect;
+
+import boofcv.struct.image.GrayF32;
+import dev.wavemark.core.Problem;
+import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.model.Optics;
+
+/** Checks of the input frame and region, the frame's noise, and the optics guess. */
+final class Frames {
+  private Frames() {}
+
+  /** Smallest frame side accepted, px. */
+  static final int MIN_SIDE_PX = 32;
+
+  static void validate(GrayF32 frame, String label) {
+    if (frame.width < MIN_SIDE_PX || frame.height < MIN_SIDE_PX) {
+      throw new WavemarkException(Problem.IMAGE_EMPTY, label + " (" + frame.width + "x" + frame.height + " px)");
+    }
+    float min = Float.POSITIVE_INFINITY;
+    float max = Float.NEGATIVE_INFINITY;
+    for (int y = 0; y < frame.height; y++) {
+      int row = frame.startIndex + y * frame.stride;
+      for (int x = 0; x < frame.width; x++) {
+        float v = frame.data[row + x];
+        if (!Float.isFinite(v)) {
+          throw new WavemarkException(Problem.IMAGE_EMPTY, label + " (pixel (" + x + ", " + y + ") is " + v + ")");
+        }
+        min = Math.min(min, v);
+        max = Math.max(max, v);
+      }
+    }
+    if (!(max > min)) {
+      throw new WavemarkException(Problem.IMAGE_EMPTY, label);
+    }
+  }
+
+  static void validateRegion(Raster eroded, FlowRegion region, String label) {
+    if (region instanceof FlowRegion.MaskRegion m
+        && (m.mask().width != eroded.width || m.mask().height != eroded.height)) {
+      throw new WavemarkException(Problem.MASK_OUTSIDE, label, "the flow mask (" + m.mask().width + "x" + m.mask().height + " px)",
+          eroded.width + "x" + eroded.height + " px");
+    }
+    if (eroded.flowCount() < MIN_SIDE_PX * MIN_SIDE_PX) {
+      throw new WavemarkException(Problem.MASK_OUTSIDE, label, "the flow region (" + eroded.flowCount() + " usable px)",
+          eroded.width + "x" + eroded.height + " px");
+    }
+  }
+
+  /**
+   * The pixel noise standard deviation: the MAD of horizontal neighbour differences over
+   * sqrt 2, on every fourth row of the flow region. Waves occupy few pixels, so the median
+   * ignores them.
+   */
+  static double noise(Raster r) {
+    int cap = (r.height / 4 + 1) * r.width;
+    double[] d = new double[cap];
+    int n = 0;
+    for (int y = 0; y < r.height; y += 4) {
+      int row = y * r.width;
+      for (int x = 0; x + 1 < r.width; x++) {
+        if (r.flow[row + x] && r.flow[row + x + 1]) {
+          d[n++] = r.data[row + x + 1] - r.data[row + x];
+        }
+      }
+    }
+    double mad = LineFit.medianAbs(java.util.Arrays.copyOf(d, n));
+    return Math.max(1e-9, 1.4826 * mad / Math.sqrt(2));
+  }
+
+  /**
+   * Shadowgraph or schlieren, from the picture: in shadowgraph every wave is a dark-bright pair,
+   * so the reduced frame's strongest excursions have partners of the other sign right next to
+   * them. Compares the mean product of the strongest pixels' neighbours along both axes.
+   */
+  static Optics guessOptics(Raster low) {
+    int w = low.width;
+    double[] mags = new double[low.data.length];
+    int n = 0;
+    for (int i = 0; i < low.data.length; i++) {
+      if (low.flow[i]) {
+        mags[n++] = Math.abs(low.data[i]);
+      }
+    }
+    double[] sorted = java.util.Arrays.copyOf(mags, n);
+    java.util.Arrays.sort(sorted);
+    double thr = sorted[(int) (0.995 * (n - 1))];
+    int opposite = 0;
+    int total = 0;
+    for (int y = 2; y < low.height - 2; y++) {
+      for (int x = 2; x < w - 2; x++) {
+        int i = y * w + x;
+        float v = low.data[i];
+        if (!low.flow[i] || Math.abs(v) < thr) {
+          continue;
+        }
+        total++;
+        float[] nb = {low.data[i - 2], low.data[i + 2], low.data[i - 2 * w], low.data[i + 2 * w]};
+        for (float q : nb) {
+          if (q * v < 0 && Math.abs(q) > 0.3 * Math.abs(v)) {
+            opposite++;
+            break;
+          }
+        }
+      }
+    }
+    return total > 0 && opposite > 0.5 * total ? Optics.SHADOWGRAPH : Optics.SCHLIEREN_VERTICAL_EDGE;
+  }
+}

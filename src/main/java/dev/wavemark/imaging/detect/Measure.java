@@ -1,0 +1,221 @@
+package dev.wavemark.imaging.detect;
+
+import dev.wavemark.core.geom.Point2;
+import java.util.function.UnaryOperator;
+
+/**
+ * The accurate stage: intensity profiles sampled along many normals of a candidate line at
+ * full resolution, the wave's centre located in each with sub-pixel precision, and a robust
+ * line fitted to those centres.
+ */
+final class Measure {
+  private Measure() {}
+
+  /** Spacing of the samples along each normal, px. */
+  static final double SAMPLE_PX = 0.5;
+  /** Spacing of the normals along the line, px. */
+  static final double NORMAL_STEP_PX = 1.0;
+  /** A profile is used only if its signature stands this many noise deviations above zero. */
+  static final double MIN_PROFILE_SNR = 2.5;
+
+  /** A candidate: the line O + s u for s in [s0, s1], in frame (distorted) pixels. */
+  record Candidate(double ox, double oy, double ux, double uy, double s0, double s1) {
+    Candidate recentred(LineFit.Result f) {
+      // project the old origin onto the fitted line, keep the orientation of the candidate
+      double ux2 = f.ux();
+      double uy2 = f.uy();
+      if (ux2 * ux + uy2 * uy < 0) {
+        ux2 = -ux2;
+        uy2 = -uy2;
+      }
+      double t = (ox - f.cx()) * ux2 + (oy - f.cy()) * uy2;
+      return new Candidate(f.cx() + t * ux2, f.cy() + t * uy2, ux2, uy2, s0, s1);
+    }
+  }
+
+  /**
+   * One measured wave boundary.
+   *
+   * @param fit the fitted line (in lens-corrected pixels when a correction was given)
+   * @param distortedFit the same points fitted before lens correction (for re-centring and for
+   *     finding where other waves meet this one in the frame)
+   * @param amplitude mean signed signature amplitude (frame units)
+   * @param widthPx mean apparent width across the line
+   * @param sign the sign used (PEAK/STEP) or the polarity (DIPOLE)
+   */
+  record Result(LineFit.Result fit, LineFit.Result distortedFit, double amplitude, double widthPx, int sign) {}
+
+  /**
+   * Measures the wave of the given signature near a candidate.
+   *
+   * @param halfWindowPx half-length of each normal profile
+   * @param fixedSign 0 to take the sign from the mean profile, else +1/-1
+   * @param noise the frame's pixel noise standard deviation
+   * @return the measurement, or null when too few profiles show the signature
+   */
+  static Result measure(Raster full, Candidate c, Signature sig, double halfWindowPx, int fixedSign, double noise,
+      UnaryOperator<Point2> undistort, int minSupport) {
+    int m = (int) Math.round(2 * halfWindowPx / SAMPLE_PX) + 1;
+    int count = (int) Math.floor((c.s1() - c.s0()) / NORMAL_STEP_PX) + 1;
+    if (count < minSupport) {
+      return null;
+    }
+    double nx = -c.uy();
+    double ny = c.ux();
+    double[][] prof = new double[count][];
+    double[] mean = new double[m];
+    int valid = 0;
+    for (int k = 0; k < count; k++) {
+      double s = c.s0() + k * NORMAL_STEP_PX;
+      double px = c.ox() + s * c.ux();
+      double py = c.oy() + s * c.uy();
+      double[] p = new double[m];
+      boolean ok = true;
+      for (int j = 0; j < m && ok; j++) {
+        double o = j * SAMPLE_PX - halfWindowPx;
+        p[j] = full.sample(px + o * nx, py + o * ny);
+        ok = !Double.isNaN(p[j]);
+      }
+      if (ok) {
+        prof[k] = p;
+        valid++;
+        for (int j = 0; j < m; j++) {
+          mean[j] += p[j];
+        }
+      }
+    }
+    if (valid < minSupport) {
+      return null;
+    }
+    for (int j = 0; j < m; j++) {
+      mean[j] /= valid;
+    }
+    int sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
+    int lo = m / 6;
+    int hi = m - 1 - m / 6;
+    int maxSep = (int) Math.round(0.8 * halfWindowPx / SAMPLE_PX);
+    // the noise of a located signature: the raw noise for lines and pairs, the derivative's for steps
+    double noiseSig = sig == Signature.STEP ? noise * 0.71 : noise;
+    // average G neighbouring profiles so that each located centre stands about 8 noise
+    // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
+    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep);
+    double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
+    int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
+    group = Math.max(1, Math.min(group, valid / Math.max(minSupport / 4, 1)));
+    if (group > 1) {
+      prof = grouped(prof, group);
+      count = prof.length;
+      noiseSig /= Math.sqrt(group);
+    }
+    double step = NORMAL_STEP_PX * group;
+    double[] xs = new double[count];
+    double[] ys = new double[count];
+    double[] dx = new double[count];
+    double[] dy = new double[count];
+    int n = 0;
+    double ampSum = 0;
+    double widthSum = 0;
+    for (int k = 0; k < count; k++) {
+      if (prof[k] == null) {
+        continue;
+      }
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep);
+      if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
+        continue;
+      }
+      if (sig == Signature.DIPOLE && fixedSign != 0 && Integer.signum((int) Math.signum(l.amplitude())) != fixedSign) {
+        continue;
+      }
+      double o = l.centre() * SAMPLE_PX - halfWindowPx;
+      double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
+      double px = c.ox() + s * c.ux() + o * nx;
+      double py = c.oy() + s * c.uy() + o * ny;
+      dx[n] = px;
+      dy[n] = py;
+      if (undistort != null) {
+        Point2 q = undistort.apply(new Point2(px, py));
+        xs[n] = q.x();
+        ys[n] = q.y();
+      } else {
+        xs[n] = px;
+        ys[n] = py;
+      }
+      ampSum += l.amplitude();
+      widthSum += l.width() * SAMPLE_PX;
+      n++;
+    }
+    if (n < Math.max(8, minSupport / group)) {
+      return null;
+    }
+    LineFit.Result distorted = LineFit.fit(java.util.Arrays.copyOf(dx, n), java.util.Arrays.copyOf(dy, n), Math.max(8, minSupport / group), 17L);
+    if (distorted == null) {
+      return null;
+    }
+    LineFit.Result fit = undistort == null ? distorted
+        : LineFit.fit(java.util.Arrays.copyOf(xs, n), java.util.Arrays.copyOf(ys, n), Math.max(8, minSupport / group), 17L);
+    if (fit == null) {
+      return null;
+    }
+    return new Result(fit, distorted, ampSum / n, widthSum / n, sign);
+  }
+
+  /** Means of consecutive runs of {@code g} profiles; a run with a missing profile is dropped. */
+  private static double[][] grouped(double[][] prof, int g) {
+    int n = prof.length / g;
+    double[][] out = new double[n][];
+    for (int i = 0; i < n; i++) {
+      double[] acc = null;
+      for (int j = 0; j < g; j++) {
+        double[] p = prof[i * g + j];
+        if (p == null) {
+          acc = null;
+          break;
+        }
+        if (acc == null) {
+          acc = p.clone();
+        } else {
+          for (int t = 0; t < p.length; t++) {
+            acc[t] += p[t];
+          }
+        }
+        if (j == g - 1) {
+          for (int t = 0; t < acc.length; t++) {
+            acc[t] /= g;
+          }
+        }
+      }
+      out[i] = acc;
+    }
+    return out;
+  }
+
+  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep) {
+    return switch (sig) {
+      case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
+      case STEP -> Profiles.step(p, sign, lo, hi);
+      case DIPOLE -> Profiles.zeroCrossing(Profiles.detrend(p, 3), lo, hi, maxSep);
+    };
+  }
+
+  /** The sign of the mean profile's signature: the sign of its largest excursion. */
+  static int dominantSign(double[] mean, Signature sig) {
+    double[] q = switch (sig) {
+      case PEAK -> Profiles.detrend(mean, 3);
+      case STEP -> Profiles.detrend(Profiles.derivative(mean), 3);
+      case DIPOLE -> Profiles.detrend(mean, 3);
+    };
+    if (sig == Signature.DIPOLE) {
+      Profiles.Located l = Profiles.zeroCrossing(q, 0, q.length - 1, q.length);
+      return l == null || l.amplitude() >= 0 ? 1 : -1;
+    }
+    double best = 0;
+    int s = 1;
+    for (int i = q.length / 6; i < q.length - q.length / 6; i++) {
+      if (Math.abs(q[i]) > best) {
+        best = Math.abs(q[i]);
+        s = q[i] >= 0 ? 1 : -1;
+      }
+    }
+    return s;
+  }
+}

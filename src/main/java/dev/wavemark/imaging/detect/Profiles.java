@@ -1,0 +1,172 @@
+package dev.wavemark.imaging.detect;
+
+/**
+ * Sub-pixel location of a wave's centre in one intensity profile sampled across it at a fixed
+ * spacing. All methods work on plain arrays so that they can be checked against analytic
+ * profiles; offsets are returned in samples (fractional index), or NaN when the profile does
+ * not show the signature clearly.
+ */
+final class Profiles {
+  private Profiles() {}
+
+  /** Levels, as fractions of the peak height, whose crossing midpoints are averaged. */
+  private static final double[] LEVELS = {0.35, 0.5, 0.65};
+
+  /** Result of one location: centre (fractional sample index), amplitude and width (samples). */
+  record Located(double centre, double amplitude, double width) {}
+
+  /** Subtracts the straight line through the means of the first and last {@code k} samples. */
+  static double[] detrend(double[] p, int k) {
+    int n = p.length;
+    double a = 0;
+    double b = 0;
+    for (int i = 0; i < k; i++) {
+      a += p[i];
+      b += p[n - 1 - i];
+    }
+    a /= k;
+    b /= k;
+    double xa = 0.5 * (k - 1);
+    double xb = n - 1 - xa;
+    double[] q = new double[n];
+    for (int i = 0; i < n; i++) {
+      q[i] = p[i] - (a + (b - a) * (i - xa) / (xb - xa));
+    }
+    return q;
+  }
+
+  /** Central differences (per sample), ends copied from their neighbours. */
+  static double[] derivative(double[] p) {
+    int n = p.length;
+    double[] d = new double[n];
+    for (int i = 1; i < n - 1; i++) {
+      d[i] = 0.5 * (p[i + 1] - p[i - 1]);
+    }
+    d[0] = d[1];
+    d[n - 1] = d[n - 2];
+    return d;
+  }
+
+  /**
+   * Centre of a thin line of the given sign (+1 bright, -1 dark) in an already detrended
+   * profile: the mean of the midpoints between the left and right crossings of 35, 50 and 65% of
+   * the peak height. The midpoint of level crossings is unbiased for any symmetric profile,
+   * including a saturated flat top, which a parabola through the top three samples is not.
+   *
+   * @param lo first index searched for the peak
+   * @param hi last index searched (inclusive)
+   */
+  static Located peak(double[] q, int sign, int lo, int hi) {
+    int best = -1;
+    double h = 0;
+    for (int i = Math.max(1, lo); i <= Math.min(q.length - 2, hi); i++) {
+      double v = sign * q[i];
+      if (v > h) {
+        h = v;
+        best = i;
+      }
+    }
+    if (best < 0) {
+      return null;
+    }
+    double sum = 0;
+    double width = Double.NaN;
+    for (double level : LEVELS) {
+      double t = level * h;
+      int j = best;
+      while (j > 0 && sign * q[j] >= t) {
+        j--;
+      }
+      if (sign * q[j] >= t) {
+        return null;
+      }
+      double left = j + (t - sign * q[j]) / (sign * q[j + 1] - sign * q[j]);
+      j = best;
+      while (j < q.length - 1 && sign * q[j] >= t) {
+        j++;
+      }
+      if (sign * q[j] >= t) {
+        return null;
+      }
+      double right = j - (t - sign * q[j]) / (sign * q[j - 1] - sign * q[j]);
+      sum += 0.5 * (left + right);
+      if (level == 0.5) {
+        width = right - left;
+      }
+    }
+    return new Located(sum / LEVELS.length, sign * h, width);
+  }
+
+  /**
+   * Midpoint of a step rising in the direction {@code sign} (+1: the profile increases with the
+   * index), as the centre of the peak of its derivative.
+   */
+  static Located step(double[] p, int sign, int lo, int hi) {
+    double[] d = detrend(derivative(p), 3);
+    Located l = peak(d, sign, lo, hi);
+    return l;
+  }
+
+  /**
+   * Zero crossing of a dark-bright (or bright-dark) pair in a detrended profile: a straight
+   * line fitted by least squares to the samples between the two lobes whose magnitude is below
+   * 70% of the weaker lobe, and its root. The amplitude is half the lobe-to-lobe difference with
+   * the sign +1 when the dark lobe comes first (lower index).
+   *
+   * @param maxSeparation the largest lobe separation accepted, samples
+   */
+  static Located zeroCrossing(double[] q, int lo, int hi, int maxSeparation) {
+    int iMax = -1;
+    int iMin = -1;
+    double vMax = 0;
+    double vMin = 0;
+    for (int i = Math.max(0, lo); i <= Math.min(q.length - 1, hi); i++) {
+      if (q[i] > vMax) {
+        vMax = q[i];
+        iMax = i;
+      }
+      if (q[i] < vMin) {
+        vMin = q[i];
+        iMin = i;
+      }
+    }
+    if (iMax < 0 || iMin < 0 || Math.abs(iMax - iMin) < 2 || Math.abs(iMax - iMin) > maxSeparation) {
+      return null;
+    }
+    int a = Math.min(iMax, iMin);
+    int b = Math.max(iMax, iMin);
+    double limit = 0.7 * Math.min(vMax, -vMin);
+    double sx = 0;
+    double sy = 0;
+    double sxx = 0;
+    double sxy = 0;
+    int n = 0;
+    for (int i = a; i <= b; i++) {
+      if (Math.abs(q[i]) <= limit) {
+        sx += i;
+        sy += q[i];
+        sxx += (double) i * i;
+        sxy += i * q[i];
+        n++;
+      }
+    }
+    if (n < 2) {
+      return null;
+    }
+    double den = n * sxx - sx * sx;
+    if (den == 0) {
+      return null;
+    }
+    double slope = (n * sxy - sx * sy) / den;
+    double icpt = (sy - slope * sx) / n;
+    if (slope == 0) {
+      return null;
+    }
+    double root = -icpt / slope;
+    if (root < a || root > b) {
+      return null;
+    }
+    int polarity = iMin < iMax ? 1 : -1;
+    return new Located(root, polarity * 0.5 * (vMax - vMin), b - a);
+  }
+}

@@ -1,0 +1,206 @@
+package dev.wavemark.imaging.detect;
+
+import boofcv.struct.image.GrayF32;
+import dev.wavemark.core.Problem;
+import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.geom.FittedLine;
+import dev.wavemark.core.geom.ImageAngles;
+import dev.wavemark.core.geom.Point2;
+import dev.wavemark.core.model.BodyShape;
+import dev.wavemark.core.model.ExpectedWave;
+import dev.wavemark.core.model.Feature;
+import dev.wavemark.core.model.ObservedWave;
+import dev.wavemark.core.model.Optics;
+import dev.wavemark.core.model.Side;
+import dev.wavemark.core.model.WaveKind;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.UnaryOperator;
+
+/**
+ * Finds every wave of a frame and measures it: candidates from pencils of rays through the
+ * points where the model geometry says waves start (on a reduced copy of the frame), then
+ * full-resolution profiles across each candidate, sub-pixel centres, and a robust line fit with
+ * an honest standard uncertainty. Thread-safe: it keeps no state between calls.
+ */
+public final class WaveDetector {
+
+  /** Pixels next to the silhouette or window edge that are left out (their blur bleeds in). */
+  static final int EDGE_MARGIN_PX = 3;
+  /** A candidate must stand this many noise deviations above the pencil's own noise. */
+  static final double MIN_CANDIDATE_SNR = 7;
+  /** Radius around a wave's origin that is not used (the corner itself is not a wave). */
+  static final double ORIGIN_SKIP_PX = 12;
+  /** Half-length of each normal profile for a shock, px. */
+  static final double SHOCK_WINDOW_PX = 8;
+  /** Angular tolerance around a hint, radians. */
+  static final double HINT_TOLERANCE_RAD = Math.toRadians(8);
+
+  private WaveDetector() {}
+
+  /** The detector with its default settings. */
+  public static WaveDetector create() {
+    return new WaveDetector();
+  }
+
+  /**
+   * Detects and measures the waves of one frame.
+   *
+   * @return the waves, each with its fitted line (lens-corrected when a correction is given),
+   *     classification, side and the model feature it starts from
+   * @throws WavemarkException {@code image-empty} for an empty or contrast-free frame,
+   *     {@code mask-outside} when the flow region or the model lies outside the picture,
+   *     {@code no-wave-found} when nothing is found
+   */
+  public List<ObservedWave> detect(DetectionRequest req) {
+    GrayF32 frame = req.frame();
+    String label = req.frameLabel();
+    Frames.validate(frame, label);
+    Raster full = Raster.of(frame, req.region()).eroded(EDGE_MARGIN_PX);
+    Frames.validateRegion(full, req.region(), label);
+    int k = Math.max(2, (int) Math.ceil(Math.max(full.width, full.height) / 512.0));
+    Raster low = full.reduced(k);
+    double noise = Frames.noise(full);
+    Optics optics = req.optics() == Optics.AUTO ? Frames.guessOptics(low) : req.optics();
+    UnaryOperator<Point2> und = req.undistort().orElse(null);
+    Context ctx = new Context(full, low, noise, optics, und, req.flowDirectionRad());
+
+    List<Search> searches = new ArrayList<>();
+    for (Search s : Search.primary(req.shape(), req.flowDirectionRad())) {
+      if (!full.inFlowOrNear(s.origin().x(), s.origin().y(), 40)) {
+        throw new WavemarkException(Problem.MASK_OUTSIDE, label, "the model feature at " + fmt(s.origin()), "flow region of the");
+      }
+      searches.add(narrow(s, req.hints()));
+    }
+    List<Found> found = new ArrayList<>();
+    for (Search s : searches) {
+      found.addAll(run(ctx, s));
+    }
+    found.addAll(Secondary.searches(req.shape(), found, ctx).stream().flatMap(s -> run(ctx, s).stream()).toList());
+    if (req.shape() instanceof BodyShape.Freestream) {
+      found.addAll(MachWaves.find(ctx));
+    }
+    List<ObservedWave> out = new ArrayList<>();
+    for (Found f : found) {
+      out.add(f.toObserved(req.hints()));
+    }
+    if (out.isEmpty()) {
+      throw new WavemarkException(Problem.NO_WAVE_FOUND, label, "wave",
+          "check the optics mode (" + optics.contractName() + "), the model position and the mask");
+    }
+    return out;
+  }
+
+  private static String fmt(Point2 p) {
+    return "(" + WavemarkException.num(p.x()) + ", " + WavemarkException.num(p.y()) + ") px";
+  }
+
+  /** Narrows a search's sector to the hints of the same feature and side, if any. */
+  static Search narrow(Search s, List<ExpectedWave> hints) {
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (ExpectedWave h : hints) {
+      if (h.feature() != s.feature() || h.side() != s.side() || h.kind().isShock() == s.fan()) {
+        continue;
+      }
+      double d = s.a0() + ImageAngles.wrap(h.directionRad() - s.a0());
+      lo = Math.min(lo, d - HINT_TOLERANCE_RAD);
+      hi = Math.max(hi, d + HINT_TOLERANCE_RAD);
+    }
+    if (lo > hi) {
+      return s;
+    }
+    return new Search(s.origin(), Math.max(s.a0(), lo), Math.min(s.a1(), hi), s.fan(), s.kind(), s.side(), s.feature());
+  }
+
+  /** Everything a search needs from the frame. */
+  record Context(Raster full, Raster low, double noise, Optics optics, UnaryOperator<Point2> undistort, double flow) {
+    boolean shadow() {
+      return optics == Optics.SHADOWGRAPH;
+    }
+  }
+
+  /** A measured wave before it becomes an ObservedWave. */
+  record Found(WaveKind kind, Side side, Feature feature, Measure.Result m, Point2 origin) {
+    ObservedWave toObserved(List<ExpectedWave> hints) {
+      LineFit.Result f = m.fit();
+      Point2 c = new Point2(f.cx(), f.cy());
+      Point2 u = new Point2(f.ux(), f.uy());
+      Point2 start = c.plus(u.times(f.startAlong()));
+      Point2 end = c.plus(u.times(f.endAlong()));
+      double dir = ImageAngles.direction(f.ux(), f.uy());
+      double sigma = Uncertainty.total(f);
+      FittedLine line = new FittedLine(c, dir, sigma, start, end, f.support(), f.rmsPx(), f.curved());
+      return new ObservedWave(kind, Optional.of(side), line, m.amplitude(), m.widthPx(), Optional.of(feature));
+    }
+  }
+
+  /** Runs one search: the pencil, the best candidate(s), the accurate measurement. */
+  static List<Found> run(Context ctx, Search s) {
+    double rMax = Math.hypot(ctx.full().width, ctx.full().height);
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax);
+    double rTyp = 250;
+    List<Found> out = new ArrayList<>();
+    if (!s.fan()) {
+      AngularScan.Hit h = ctx.shadow()
+          ? scan.strongestPair(MIN_CANDIDATE_SNR, (int) Math.ceil(12.0 / rTyp / scan.step))
+          : scan.strongestLine(MIN_CANDIDATE_SNR, 10.0 / rTyp / scan.step);
+      if (h == null) {
+        return out;
+      }
+      Measure.Result m = measureAlong(ctx, scan, h.index(), ctx.shadow() ? Signature.DIPOLE : Signature.PEAK, SHOCK_WINDOW_PX, ORIGIN_SKIP_PX);
+      if (m != null) {
+        out.add(new Found(s.kind(), s.side(), s.feature(), m, s.origin()));
+      }
+      return out;
+    }
+    AngularScan.Hit[] edges = ctx.shadow()
+        ? scan.oppositeLines(0.6 * MIN_CANDIDATE_SNR, (int) Math.ceil(12.0 / rTyp / scan.step), 10.0 / rTyp / scan.step)
+        : scan.widestBand(0.6 * MIN_CANDIDATE_SNR, 12.0 / rTyp / scan.step);
+    if (edges == null) {
+      return out;
+    }
+    double spread = Math.abs(edges[1].index() - edges[0].index()) * scan.step;
+    double window = SHOCK_WINDOW_PX;
+    double start = Math.max(ORIGIN_SKIP_PX, 2.5 * window / Math.max(spread, 1e-3));
+    Signature sig = ctx.shadow() ? Signature.PEAK : Signature.STEP;
+    Measure.Result[] ms = new Measure.Result[2];
+    for (int i = 0; i < 2; i++) {
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start);
+    }
+    // the head is the boundary steeper to the freestream
+    double[] steep = new double[2];
+    for (int i = 0; i < 2; i++) {
+      steep[i] = ImageAngles.acuteToFlow(scan.angle(edges[i].index()), ctx.flow());
+    }
+    int head = steep[0] >= steep[1] ? 0 : 1;
+    for (int i = 0; i < 2; i++) {
+      if (ms[i] != null) {
+        WaveKind kind = i == head ? WaveKind.EXPANSION_HEAD : WaveKind.EXPANSION_TAIL;
+        out.add(new Found(kind, s.side(), s.feature(), ms[i], s.origin()));
+      }
+    }
+    return out;
+  }
+
+  /** Two passes of the accurate stage along the pencil direction of fractional index {@code idx}. */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0) {
+    double a = scan.angle(idx);
+    int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
+    double s1 = scan.reach[i] - 2;
+    if (s1 - s0 < 40) {
+      return null;
+    }
+    double ux = Math.cos(a);
+    double uy = -Math.sin(a);
+    Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
+    int minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
+    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+    if (m == null) {
+      return null;
+    }
+    Measure.Candidate c2 = c.recentred(m.distortedFit());
+    return Measure.measure(ctx.full(), c2, sig, window, m.sign(), ctx.noise(), ctx.undistort(), minSupport);
+  }
+}
