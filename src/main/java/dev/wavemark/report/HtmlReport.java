@@ -27,6 +27,10 @@ final class HtmlReport {
 
   private HtmlReport() {}
 
+  static String when(Instant t) {
+    return WHEN.format(t);
+  }
+
   static byte[] render(String template, Object page) {
     StringOutput out = new StringOutput();
     ENGINE.render(template, page, out);
