@@ -139,4 +139,78 @@ class TheoryCommandTest {
     assertEquals(1, r.rc(), r.both());
     assertTrue(r.err().contains("0.9") && r.err().contains("greater than 1"), r.both());
   }
+
+  @Test
+  void coneShockAngleAndInverse() throws Exception {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "10", "--json");
+    assertEquals(0, r.rc(), r.both());
+    // Sims (NASA SP-3004) / NACA 1135 Chart 5 (from memory): 10 deg cone at M = 2, shock 31.2 deg.
+    double shock = r.json().get("shockDeg").asDouble();
+    assertEquals(31.2, shock, 0.05, r.both());
+    Run inv = run("theory", "cone", "--shock", Double.toString(shock), "--cone", "10", "--json");
+    assertEquals(0, inv.rc(), inv.both());
+    assertEquals(2.0, inv.json().get("mach").asDouble(), 1e-6, inv.both());
+  }
+
+  @Test
+  void coneFieldRaysAreCsvFromConeToShock() {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "20", "--rays", "8");
+    assertEquals(0, r.rc(), r.both());
+    List<String> lines = r.out().lines().toList();
+    assertEquals(10, lines.size(), r.both());
+    assertTrue(lines.get(0).startsWith("rayDeg,mach,pressureRatio,densityRatio"), r.both());
+    assertEquals(20.0, Double.parseDouble(lines.get(1).split(",")[0]), 1e-6, r.both());
+  }
+
+  @Test
+  void detachedConeIsOneLine() {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "45");
+    assertEquals(1, r.rc(), r.both());
+    assertEquals(1, r.err().lines().count(), r.both());
+    assertTrue(r.err().contains("45") && r.err().contains("shock-detached"), r.both());
+  }
+
+  @Test
+  void standoffIsLabelledAndRangeChecked() throws Exception {
+    Run r = run("theory", "standoff", "--mach", "3", "--nose", "sphere", "--json");
+    assertEquals(0, r.rc(), r.both());
+    // Billig (1967): delta/R = 0.143 exp(3.24 / M^2) for a sphere.
+    assertEquals(0.143 * Math.exp(3.24 / 9), r.json().get("standoffRatio").asDouble(), 1e-12, r.both());
+    assertTrue(r.json().get("basis").asText().contains("correlation"), r.both());
+    Run back = run("theory", "standoff", "--standoff-ratio", r.json().get("standoffRatio").asText(), "--json");
+    assertEquals(3.0, back.json().get("mach").asDouble(), 1e-9, back.both());
+    Run out = run("theory", "standoff", "--mach", "25");
+    assertEquals(1, out.rc(), out.both());
+    assertTrue(out.err().contains("25") && out.err().contains("[1.2, 20]"), out.both());
+  }
+
+  @Test
+  void reflectionVerdictOnBothSidesOfDetachment() throws Exception {
+    Run r = run("theory", "reflection", "--mach", "2", "--theta", "10", "--json");
+    assertEquals(0, r.rc(), r.both());
+    assertEquals("regular", r.json().get("verdict").asText(), r.both());
+    double m2 = r.json().get("m2").asDouble();
+    assertTrue(r.json().get("m3").asDouble() < m2 && m2 < 2, r.both());
+    // The reflected shock's deflection back to the wall equals the generator's: beta2 - theta is its angle to the wall.
+    assertEquals(r.json().get("reflectedAngleToFlowDeg").asDouble() - 10, r.json().get("reflectedAngleToWallDeg").asDouble(), 1e-9, r.both());
+    Run mach = run("theory", "reflection", "--mach", "2", "--theta", "14", "--json");
+    assertEquals(0, mach.rc(), mach.both());
+    assertEquals("mach", mach.json().get("verdict").asText(), mach.both());
+  }
+
+  @Test
+  void symmetricIntersectionHasAStraightSlipLine() throws Exception {
+    Run r = run("theory", "intersection", "--mach", "2.5", "--upper", "8", "--lower", "8", "--json");
+    assertEquals(0, r.rc(), r.both());
+    assertEquals(0.0, r.json().get("slipLineDirectionDeg").asDouble(), 1e-9, r.both());
+    assertEquals(r.json().get("machAbove").asDouble(), r.json().get("machBelow").asDouble(), 1e-9, r.both());
+  }
+
+  @Test
+  void diamondAtZeroIncidenceHasNoLift() throws Exception {
+    Run r = run("theory", "shock-expansion", "--mach", "2", "--shape", "diamond", "--half-angle", "5", "--json");
+    assertEquals(0, r.rc(), r.both());
+    assertEquals(0.0, r.json().get("cl").asDouble(), 1e-12, r.both());
+    assertTrue(r.json().get("cd").asDouble() > 0, r.both());
+  }
 }
