@@ -18,18 +18,12 @@ import picocli.CommandLine.Command;
         MachAngleCommand.class,
         PrandtlMeyerCommand.class,
         ObliqueShockCommand.class,
-<<<<<<< HEAD
         ConeCommand.class,
         StandoffCommand.class,
         ShockExpansionCommand.class,
         ReflectionCommand.class,
-        IntersectionCommand.class,
-=======
-        ShockExpansionCommand.class,
-        ReflectionCommand.class,
         ShockCrossingCommand.class,
         DoubleRampCommand.class,
->>>>>>> main
     })
 public final class TheoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

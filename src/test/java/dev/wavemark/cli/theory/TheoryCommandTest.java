@@ -183,34 +183,4 @@ class TheoryCommandTest {
     assertEquals(1, out.rc(), out.both());
     assertTrue(out.err().contains("25") && out.err().contains("[1.2, 20]"), out.both());
   }
-
-  @Test
-  void reflectionVerdictOnBothSidesOfDetachment() throws Exception {
-    Run r = run("theory", "reflection", "--mach", "2", "--theta", "10", "--json");
-    assertEquals(0, r.rc(), r.both());
-    assertEquals("regular", r.json().get("verdict").asText(), r.both());
-    double m2 = r.json().get("m2").asDouble();
-    assertTrue(r.json().get("m3").asDouble() < m2 && m2 < 2, r.both());
-    // The reflected shock's deflection back to the wall equals the generator's: beta2 - theta is its angle to the wall.
-    assertEquals(r.json().get("reflectedAngleToFlowDeg").asDouble() - 10, r.json().get("reflectedAngleToWallDeg").asDouble(), 1e-9, r.both());
-    Run mach = run("theory", "reflection", "--mach", "2", "--theta", "14", "--json");
-    assertEquals(0, mach.rc(), mach.both());
-    assertEquals("mach", mach.json().get("verdict").asText(), mach.both());
-  }
-
-  @Test
-  void symmetricIntersectionHasAStraightSlipLine() throws Exception {
-    Run r = run("theory", "intersection", "--mach", "2.5", "--upper", "8", "--lower", "8", "--json");
-    assertEquals(0, r.rc(), r.both());
-    assertEquals(0.0, r.json().get("slipLineDirectionDeg").asDouble(), 1e-9, r.both());
-    assertEquals(r.json().get("machAbove").asDouble(), r.json().get("machBelow").asDouble(), 1e-9, r.both());
-  }
-
-  @Test
-  void diamondAtZeroIncidenceHasNoLift() throws Exception {
-    Run r = run("theory", "shock-expansion", "--mach", "2", "--shape", "diamond", "--half-angle", "5", "--json");
-    assertEquals(0, r.rc(), r.both());
-    assertEquals(0.0, r.json().get("cl").asDouble(), 1e-12, r.both());
-    assertTrue(r.json().get("cd").asDouble() > 0, r.both());
-  }
 }
