@@ -93,7 +93,7 @@ final class Measure {
     int sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
     int lo = m / 6;
     int hi = m - 1 - m / 6;
-    int maxSep = (int) Math.round(0.8 * halfWindowPx / SAMPLE_PX);
+    int maxSep = (int) Math.round(1.4 * halfWindowPx / SAMPLE_PX);
     // the noise of a located signature: the raw noise for lines and pairs, the derivative's for steps
     double noiseSig = sig == Signature.STEP ? noise * 0.71 : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
@@ -121,9 +121,6 @@ final class Measure {
       }
       Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep);
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
-        continue;
-      }
-      if (sig == Signature.DIPOLE && fixedSign != 0 && Integer.signum((int) Math.signum(l.amplitude())) != fixedSign) {
         continue;
       }
       double o = l.centre() * SAMPLE_PX - halfWindowPx;
@@ -193,7 +190,7 @@ final class Measure {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi);
-      case DIPOLE -> Profiles.zeroCrossing(Profiles.detrend(p, 3), lo, hi, maxSep);
+      case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
     };
   }
 

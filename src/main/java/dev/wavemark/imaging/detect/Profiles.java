@@ -108,10 +108,11 @@ final class Profiles {
   }
 
   /**
-   * Zero crossing of a dark-bright (or bright-dark) pair in a detrended profile: a straight
-   * line fitted by least squares to the samples between the two lobes whose magnitude is below
-   * 70% of the weaker lobe, and its root. The amplitude is half the lobe-to-lobe difference with
-   * the sign +1 when the dark lobe comes first (lower index).
+   * Zero crossing of a dark-bright (or bright-dark) pair in a detrended profile. A shadowgraph
+   * shock is rarely symmetric (the light leaving a wide dark band piles up in a thin bright
+   * caustic), so the crossing taken is the steepest sign change between the brightest and the
+   * darkest sample, refined by a least-squares line through the two samples either side of it.
+   * The amplitude is half the lobe-to-lobe difference, signed +1 when the dark lobe comes first.
    *
    * @param maxSeparation the largest lobe separation accepted, samples
    */
@@ -135,38 +136,65 @@ final class Profiles {
     }
     int a = Math.min(iMax, iMin);
     int b = Math.max(iMax, iMin);
-    double limit = 0.7 * Math.min(vMax, -vMin);
+    int best = -1;
+    double steep = 0;
+    for (int j = a; j < b; j++) {
+      if (q[j] * q[j + 1] <= 0 && Math.abs(q[j + 1] - q[j]) > steep) {
+        steep = Math.abs(q[j + 1] - q[j]);
+        best = j;
+      }
+    }
+    if (best < 0) {
+      return null;
+    }
     double sx = 0;
     double sy = 0;
     double sxx = 0;
     double sxy = 0;
     int n = 0;
-    for (int i = a; i <= b; i++) {
-      if (Math.abs(q[i]) <= limit) {
-        sx += i;
-        sy += q[i];
-        sxx += (double) i * i;
-        sxy += i * q[i];
-        n++;
-      }
-    }
-    if (n < 2) {
-      return null;
+    for (int i = Math.max(a, best - 1); i <= Math.min(b, best + 2); i++) {
+      sx += i;
+      sy += q[i];
+      sxx += (double) i * i;
+      sxy += i * q[i];
+      n++;
     }
     double den = n * sxx - sx * sx;
-    if (den == 0) {
-      return null;
-    }
-    double slope = (n * sxy - sx * sy) / den;
-    double icpt = (sy - slope * sx) / n;
+    double slope = den == 0 ? 0 : (n * sxy - sx * sy) / den;
+    double root;
     if (slope == 0) {
-      return null;
+      root = best + q[best] / (q[best] - q[best + 1]);
+    } else {
+      root = -(sy - slope * sx) / n / slope;
     }
-    double root = -icpt / slope;
-    if (root < a || root > b) {
-      return null;
+    if (root < best - 1 || root > best + 2) {
+      root = best + q[best] / (q[best] - q[best + 1]);
     }
     int polarity = iMin < iMax ? 1 : -1;
     return new Located(root, polarity * 0.5 * (vMax - vMin), b - a);
+  }
+
+  /**
+   * Centre of a dark-bright pair as the peak of its running integral: the integral of a
+   * shadowgraph profile is the deflection profile itself (a single hump centred on the wave),
+   * and an integral is insensitive to how the light is shared between a wide dark band and a
+   * thin caustic, which moves the steepest zero crossing by pixels from one normal to the next.
+   *
+   * @param polarity +1 when the dark lobe comes first
+   */
+  static Located pairCentre(double[] q, int polarity, int lo, int hi, int maxSeparation) {
+    Located z = zeroCrossing(q, lo, hi, maxSeparation);
+    if (z == null || (int) Math.signum(z.amplitude()) != polarity) {
+      return null;
+    }
+    double[] c = new double[q.length];
+    double acc = 0;
+    for (int i = 0; i < q.length; i++) {
+      // the integral up to the sample's centre, so that the hump is not shifted by half a sample
+      c[i] = acc + 0.5 * q[i];
+      acc += q[i];
+    }
+    Located p = peak(detrend(c, 2), -polarity, lo, hi);
+    return p == null ? null : new Located(p.centre(), z.amplitude(), p.width());
   }
 }

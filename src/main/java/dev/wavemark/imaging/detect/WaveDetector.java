@@ -34,6 +34,8 @@ public final class WaveDetector {
   static final double ORIGIN_SKIP_PX = 12;
   /** Half-length of each normal profile for a shock, px. */
   static final double SHOCK_WINDOW_PX = 8;
+  /** Half-length of each normal profile for a shadowgraph shock (dark band and caustic), px. */
+  static final double SHADOW_WINDOW_PX = 12;
   /** Angular tolerance around a hint, radians. */
   static final double HINT_TOLERANCE_RAD = Math.toRadians(8);
 
@@ -143,13 +145,14 @@ public final class WaveDetector {
     double rTyp = 250;
     List<Found> out = new ArrayList<>();
     if (!s.fan()) {
-      AngularScan.Hit h = ctx.shadow()
-          ? scan.strongestPair(MIN_CANDIDATE_SNR, (int) Math.ceil(12.0 / rTyp / scan.step))
-          : scan.strongestLine(MIN_CANDIDATE_SNR, 10.0 / rTyp / scan.step);
+      // in shadowgraph the wide dark band of the pair is the strongest line in the pencil; the
+      // accurate stage's window covers both lobes
+      AngularScan.Hit h = scan.strongestLine(MIN_CANDIDATE_SNR, (ctx.shadow() ? 14.0 : 10.0) / rTyp / scan.step);
       if (h == null) {
         return out;
       }
-      Measure.Result m = measureAlong(ctx, scan, h.index(), ctx.shadow() ? Signature.DIPOLE : Signature.PEAK, SHOCK_WINDOW_PX, ORIGIN_SKIP_PX);
+      Measure.Result m = measureAlong(ctx, scan, h.index(), ctx.shadow() ? Signature.DIPOLE : Signature.PEAK,
+          ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX, ORIGIN_SKIP_PX);
       if (m != null) {
         out.add(new Found(s.kind(), s.side(), s.feature(), m, s.origin()));
       }
