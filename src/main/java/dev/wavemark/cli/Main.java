@@ -26,7 +26,7 @@ public final class Main implements Runnable {
    */
   static Object[] subcommands() {
     return new Object[] {new dev.wavemark.cli.theory.TheoryCommand(), new dev.wavemark.cli.render.RenderCommand(),
-        new dev.wavemark.cli.render.SamplesCommand(), new CalibrateCommand()};
+        new dev.wavemark.cli.render.SamplesCommand(), new CalibrateCommand(), new AnalyzeCommand(), new DemoCommand()};
   }
 
   /** Builds the configured command line; tests call this with their own writers. */

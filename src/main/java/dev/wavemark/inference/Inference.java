@@ -19,6 +19,9 @@ import java.util.List;
  * {@link WavemarkException} only for arguments no picture can cause (a non-positive frame size).
  */
 public final class Inference {
+  /** The production theory: the model's full pattern, or its incident shocks where no regular reflection exists. */
+  private static final PatternSource PRODUCTION = Fallbacks.incidentShocksWhenNoRegularReflection(WavePattern::of);
+
   private Inference() {}
 
   /**
@@ -62,12 +65,12 @@ public final class Inference {
    * @throws WavemarkException bad-argument for a non-positive picture size; nothing a picture can cause
    */
   public static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx) {
-    return ofFrame(run, observed, widthPx, heightPx, Options.DEFAULTS, WavePattern::of);
+    return ofFrame(run, observed, widthPx, heightPx, Options.DEFAULTS, PRODUCTION);
   }
 
   /** As {@link #ofFrame(RunSpec, List, int, int)} with explicit options. */
   public static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx, Options options) {
-    return ofFrame(run, observed, widthPx, heightPx, options, WavePattern::of);
+    return ofFrame(run, observed, widthPx, heightPx, options, PRODUCTION);
   }
 
   static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx, PatternSource patterns) {

@@ -38,7 +38,9 @@ class PatternInferenceTest {
         Arguments.of(new BodyShape.ExpansionCorner(Math.toRadians(10), new Point2(400, 600), LOWER_WALL), 2.0),
         Arguments.of(new BodyShape.DoubleRamp(Math.toRadians(8), new Point2(300, 600), Math.toRadians(8), new Point2(450, 600), LOWER_WALL), 3.0),
         Arguments.of(new BodyShape.ShockGenerator(Math.toRadians(8), new Point2(150, 250), LOWER_WALL), 2.5),
-        Arguments.of(new BodyShape.Freestream(Optional.of(LOWER_WALL)), 1.8));
+        Arguments.of(new BodyShape.Freestream(Optional.of(LOWER_WALL)), 1.8),
+        Arguments.of(new BodyShape.Cone(Math.toRadians(10), 0, le, 300), 2.0),
+        Arguments.of(new BodyShape.TwinGenerators(new Point2(150, 150), new Point2(150, 618), Math.toRadians(7), Math.toRadians(7)), 2.5));
   }
 
   @ParameterizedTest(name = "{0} at M={1}")

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.wavemark.core.gas.ShockReflection;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.BodyShape;
 import dev.wavemark.core.model.ExpectedWave;
@@ -36,14 +37,16 @@ class ReflectionTest {
 
   @Test
   void criteriaAtMachFiveMatchThePublishedDualSolutionDomain() {
-    assertEquals(20.9, Math.toDegrees(ReflectionCriteria.vonNeumannDeflection(5, 1.4)), CRITERIA_TOL_DEG);
-    assertEquals(27.75, Math.toDegrees(ReflectionCriteria.detachmentDeflection(5, 1.4)), CRITERIA_TOL_DEG);
+    assertEquals(20.9, Math.toDegrees(ShockReflection.vonNeumann(5, 1.4).deflectionRad()), CRITERIA_TOL_DEG);
+    assertEquals(27.75, Math.toDegrees(ShockReflection.detachment(5, 1.4).deflectionRad()), CRITERIA_TOL_DEG);
   }
 
   @Test
-  void belowMachTwoPointTwoTheCriteriaCoincide() {
-    assertEquals(ReflectionCriteria.detachmentDeflection(2.0, 1.4), ReflectionCriteria.vonNeumannDeflection(2.0, 1.4), 1e-12);
-    assertTrue(ReflectionCriteria.vonNeumannDeflection(2.5, 1.4) < ReflectionCriteria.detachmentDeflection(2.5, 1.4));
+  void belowMachTwoPointTwoThereIsNoDualSolutionDomain() {
+    ReflectionVerdict v = ReflectionJudge.judge(generator(12.8), Optional.of(2.0), "inferred", 1.4, EnumSet.of(WaveKind.REFLECTED_SHOCK));
+    assertEquals(ReflectionVerdict.Kind.REGULAR, v.predicted());
+    ReflectionVerdict.Limits l = v.limits().orElseThrow();
+    assertEquals(l.detachmentDeflectionRad(), l.vonNeumannDeflectionRad(), 0.0);
   }
 
   @Test
@@ -103,5 +106,44 @@ class ReflectionTest {
     assertEquals(ReflectionVerdict.Kind.MACH, g.reflection().verdict());
     assertEquals(ReflectionVerdict.Kind.REGULAR, g.reflection().predicted());
     assertTrue(g.warnings().stream().anyMatch(w -> w.code() == Warning.Code.REFLECTION_DISAGREES), g.warnings().toString());
+  }
+
+  @Test
+  void endToEndMachReflection() {
+    // 20° at M = 2.5 lies beyond the detachment criterion (about 18°): a Mach reflection.
+    BodyShape shape = generator(20);
+    RunSpec run = Fixtures.run(shape, 0, 0, 0, Fixtures.nominal(2.3));
+    List<ObservedWave> obs = new ArrayList<>();
+    for (ExpectedWave e : WavePattern.of(shape, 2.5, 1.4, 0, Fixtures.W, Fixtures.H)) {
+      obs.add(Fixtures.along(e, 0, Math.toRadians(0.05)));
+    }
+    FrameInference f = Inference.ofFrame(run, obs, Fixtures.W, Fixtures.H);
+    assertEquals(2.5, f.mach().orElseThrow(() -> new AssertionError(f.warnings().toString())).value(), 1e-6, f.estimates().toString());
+    assertEquals(ReflectionVerdict.Kind.MACH, f.reflection().verdict(), f.reflection().reason());
+    assertEquals(ReflectionVerdict.Kind.MACH, f.reflection().predicted());
+    assertFalse(f.warnings().stream().anyMatch(w -> w.code() == Warning.Code.REFLECTION_DISAGREES), f.warnings().toString());
+  }
+
+  @Test
+  void incidentShockAloneWhenTheoryHasNoPattern() {
+    // A pattern source that, like an older pattern, has no solution beyond detachment.
+    BodyShape shape = generator(20);
+    PatternSource strict = (sh, m, g, fl, w, h) -> {
+      if (sh instanceof BodyShape.ShockGenerator) {
+        throw new dev.wavemark.core.WavemarkException(dev.wavemark.core.Problem.SHOCK_DETACHED, "20", "18", "2.5");
+      }
+      return WavePattern.of(sh, m, g, fl, w, h);
+    };
+    PatternSource withFallback = Fallbacks.incidentShocksWhenNoRegularReflection(strict);
+    RunSpec run = Fixtures.run(shape, 0, 0, 0, Fixtures.nominal(2.3));
+    ExpectedWave incident = WavePattern.of(shape, 2.5, 1.4, 0, Fixtures.W, Fixtures.H).get(0);
+    ObservedWave shock = Fixtures.along(incident, 0, Math.toRadians(0.05));
+    ObservedWave stem = new ObservedWave(WaveKind.MACH_STEM, Optional.empty(),
+        new dev.wavemark.core.geom.FittedLine(new Point2(560, 560), Math.toRadians(90), 0.01, new Point2(560, 520),
+            new Point2(560, 600), 80, 0.4, false), 0.3, 3, Optional.empty());
+    FrameInference f = Inference.ofFrame(run, List.of(shock, stem), Fixtures.W, Fixtures.H, withFallback);
+    assertEquals(2.5, f.mach().orElseThrow(() -> new AssertionError(f.warnings().toString())).value(), 1e-6);
+    assertEquals(ReflectionVerdict.Kind.MACH, f.reflection().verdict(), f.reflection().reason());
+    assertTrue(f.warnings().isEmpty(), f.warnings().toString());
   }
 }

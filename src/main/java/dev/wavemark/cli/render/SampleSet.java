@@ -117,7 +117,7 @@ final class SampleSet {
     bench().write(calDir.resolve("bench.json"));
     benchRoi().write(calDir.resolve("bench-roi.json"));
     var lens = bench().toDomain("bench").lens().orElseThrow();
-    double[][] poses = {{0, 0, 0.006}, {0.35, 0, 0.02}, {-0.35, 0.05, -0.03}, {0.05, 0.38, 0.01}, {0.02, -0.36, 0.04},
+    double[][] poses = {{0, 0, -Math.toRadians(bench().flowDirectionDeg())}, {0.35, 0, 0.02}, {-0.35, 0.05, -0.03}, {0.05, 0.38, 0.01}, {0.02, -0.36, 0.04},
         {0.3, 0.3, -0.02}};
     for (int i = 0; i < poses.length; i++) {
       double sq = (i == 0 ? 36.4 : 30) * S;

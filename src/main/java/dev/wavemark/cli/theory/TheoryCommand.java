@@ -18,6 +18,8 @@ import picocli.CommandLine.Command;
         MachAngleCommand.class,
         PrandtlMeyerCommand.class,
         ObliqueShockCommand.class,
+        ConeCommand.class,
+        StandoffCommand.class,
         ShockExpansionCommand.class,
         ReflectionCommand.class,
         ShockCrossingCommand.class,

@@ -73,4 +73,24 @@ class RenderCommandTest {
     assertEquals(1, rc);
     assertTrue(err.toString().contains("[shock-detached]"), err.toString());
   }
+
+  @Test
+  void sequenceIsACompressedMultiPageTiffThatImageJReads() throws Exception {
+    Path scene = dir.resolve("s.scene.json");
+    Files.writeString(scene, """
+        { "seed": 9, "sizePx": [96, 72], "mach": 2.5,
+          "sequence": {"frames": 3, "machDriftPerFrame": 0.01, "shockJitterPx": 0.1},
+          "model": {"shape": "wedge", "deflectionDeg": 10, "leadingEdgePx": [20, 36], "chordPx": 30} }
+        """);
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    int rc = run(out, err, "render", scene.toString(), "--out", dir.resolve("s.tif").toString());
+    assertEquals(0, rc, out + "\n" + err);
+    ij.ImagePlus imp = ij.IJ.openImage(dir.resolve("s.tif").toString());
+    assertEquals(3, imp.getStackSize());
+    assertEquals(16, imp.getBitDepth());
+    TruthFile t = TruthFile.read(dir.resolve("s.truth.json"));
+    assertEquals(3, t.frames().size());
+    assertEquals(2.52, t.frames().get(2).mach(), 1e-12, "drift 0.01 per frame, no scatter");
+  }
 }

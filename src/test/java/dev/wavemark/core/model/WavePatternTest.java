@@ -145,4 +145,16 @@ class WavePatternTest {
     assertEquals(beta, find(ws, "upper conical shock").angleToFlowRad(), 1e-12);
     assertEquals(-beta, find(ws, "lower conical shock").directionRad(), 1e-12);
   }
+
+  @Test
+  void diamondTrailingEdgeWavesMatchShockExpansionTheory() {
+    double h = Math.toRadians(7);
+    double a = Math.toRadians(4);
+    BodyShape d = new BodyShape.Diamond(h, a, new Point2(150, 240), 230);
+    List<ExpectedWave> ws = WavePattern.of(d, 2.5, G, 0, 640, 480);
+    dev.wavemark.core.gas.ShockExpansion.Sharp te = (dev.wavemark.core.gas.ShockExpansion.Sharp)
+        dev.wavemark.core.gas.ShockExpansion.solve(dev.wavemark.core.gas.Profile.diamond(h, 230), 2.5, a, G).trailingEdge();
+    assertEquals(te.slipLine().directionRad(), find(ws, "trailing-edge slip line").directionRad(), 1e-9);
+    assertEquals(te.upperWave().turn().headAngleRad(), find(ws, "upper trailing-edge shock").angleToFlowRad(), 1e-7);
+  }
 }
