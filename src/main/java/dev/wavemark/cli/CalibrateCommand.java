@@ -66,6 +66,11 @@ public final class CalibrateCommand implements Callable<Integer> {
           + "(default ${DEFAULT-VALUE}: measurement only).")
   double placementDeg;
 
+  @Option(names = "--radial-terms", paramLabel = "N", defaultValue = "2",
+      description = "Radial distortion coefficients to estimate, 1 or 2 (default ${DEFAULT-VALUE}; use 1 for a long lens, "
+          + "whose narrow field cannot separate k1 from k2).")
+  int radialTerms;
+
   @Option(names = "--tangential", description = "Also estimate tangential (decentring) distortion.")
   boolean tangential;
 
@@ -75,6 +80,9 @@ public final class CalibrateCommand implements Callable<Integer> {
     if (!m.matches()) {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "--squares must be ROWSxCOLS counted in squares, e.g. 7x9, got '" + squares + "'");
+    }
+    if (radialTerms < 1 || radialTerms > 2) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--radial-terms must be 1 or 2");
     }
     if (!(placementDeg >= 0 && placementDeg < 10)) {
       throw new CommandLine.ParameterException(spec.commandLine(), "--placement-uncertainty-deg must be in [0, 10)");
@@ -87,7 +95,7 @@ public final class CalibrateCommand implements Callable<Integer> {
       return CalibrationFile.read(p).toDomain(p.toString()).lens();
     });
     BenchCalibration.Result r = BenchCalibration.run(new BenchCalibration.Request(images, Optional.ofNullable(inSitu), target,
-        prior, Math.toRadians(nominalDeg), Math.toRadians(placementDeg), tangential));
+        prior, Math.toRadians(nominalDeg), Math.toRadians(placementDeg), radialTerms, tangential));
     CalibrationFile file = CalibrationFile.fromDomain(r.calibration());
     if (r.pose().isEmpty()) {
       file = new CalibrationFile(null, null, null, file.lens(), null);
@@ -96,8 +104,8 @@ public final class CalibrateCommand implements Callable<Integer> {
 
     PrintWriter o = spec.commandLine().getOut();
     r.lensFit().ifPresent(f -> o.printf(Locale.ROOT,
-        "lens: fx %.2f px, fy %.2f px, centre (%.2f, %.2f) px, k1 %.5f, k2 %.5f from %d views; reprojection error mean %.3f px, max %.3f px%n",
-        f.camera().fx, f.camera().fy, f.camera().cx, f.camera().cy, f.camera().radial[0], f.camera().radial[1], f.views(),
+        "lens: fx %.2f px, fy %.2f px, centre (%.2f, %.2f) px, radial %s from %d views; reprojection error mean %.3f px, max %.3f px%n",
+        f.camera().fx, f.camera().fy, f.camera().cx, f.camera().cy, java.util.Arrays.toString(f.camera().radial), f.views(),
         f.meanErrorPx(), f.maxErrorPx()));
     if (r.lensFit().isEmpty()) {
       o.println(prior.isPresent() ? "lens: taken from " + lensFrom : "lens: none (no lens views given; points are not corrected)");

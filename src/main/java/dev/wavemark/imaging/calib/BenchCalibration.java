@@ -30,10 +30,11 @@ public final class BenchCalibration {
    * @param nominalFlowRad the rough flow direction that picks one of the board's edge directions
    * @param placementUncertaintyRad standard uncertainty of the board's alignment with the
    *     tunnel axis, added in quadrature to the measured one
+   * @param radialTerms radial coefficients to estimate, 1 or 2
    * @param tangential whether to estimate tangential distortion too
    */
   public record Request(List<Path> images, Optional<Path> inSitu, ChessboardTarget target, Optional<Calibration.Lens> priorLens,
-      double nominalFlowRad, double placementUncertaintyRad, boolean tangential) {
+      double nominalFlowRad, double placementUncertaintyRad, int radialTerms, boolean tangential) {
     public Request {
       images = List.copyOf(images);
     }
@@ -77,7 +78,7 @@ public final class BenchCalibration {
       obs.add(detect(r.target(), g, p));
     }
     Optional<IntrinsicFit> fit = obs.isEmpty() ? Optional.empty()
-        : Optional.of(IntrinsicFit.estimate(r.target(), obs, width, height, r.tangential()));
+        : Optional.of(IntrinsicFit.estimate(r.target(), obs, width, height, r.radialTerms(), r.tangential()));
     Optional<Calibration.Lens> lens = fit.map(f -> Lenses.fromBoof(f.camera())).or(r::priorLens);
 
     Optional<TargetPose> pose = Optional.empty();

@@ -10,7 +10,7 @@ import java.util.List;
 
 /**
  * Camera intrinsics and Brown distortion from several views of a planar target, by Zhang's
- * method with bundle adjustment (BoofCV {@code CalibrateMonoPlanar}): zero skew, two radial
+ * method with bundle adjustment (BoofCV {@code CalibrateMonoPlanar}): zero skew, one or two radial
  * terms, tangential terms optional.
  *
  * @param camera the estimated lens
@@ -30,12 +30,25 @@ public record IntrinsicFit(CameraPinholeBrown camera, int views, double meanErro
    */
   public static IntrinsicFit estimate(ChessboardTarget target, List<CalibrationObservation> observations, int width, int height,
       boolean tangential) {
+    return estimate(target, observations, width, height, 2, tangential);
+  }
+
+  /**
+   * As {@link #estimate(ChessboardTarget, List, int, int, boolean)} with {@code radialTerms} (1 or 2) radial
+   * coefficients. With a long focal length (a narrow field, as on most schlieren benches) k1 and k2
+   * cannot be told apart and two terms give a wild k2; one term is then the better model.
+   */
+  public static IntrinsicFit estimate(ChessboardTarget target, List<CalibrationObservation> observations, int width, int height,
+      int radialTerms, boolean tangential) {
+    if (radialTerms < 1 || radialTerms > 2) {
+      throw new WavemarkException(Problem.BAD_ARGUMENT, "radial terms must be 1 or 2, got " + radialTerms);
+    }
     if (observations.size() < MIN_VIEWS) {
       throw new WavemarkException(Problem.BAD_ARGUMENT,
           "lens calibration needs at least " + MIN_VIEWS + " views of the target, tilted differently; got " + observations.size());
     }
     CalibrateMonoPlanar cal = new CalibrateMonoPlanar();
-    cal.configurePinhole(true, 2, tangential);
+    cal.configurePinhole(true, radialTerms, tangential);
     cal.initialize(width, height, List.of(target.layout()));
     for (CalibrationObservation o : observations) {
       cal.addImage(o);
