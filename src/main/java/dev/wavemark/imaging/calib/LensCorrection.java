@@ -8,6 +8,7 @@ import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.Calibration;
 import georegression.struct.point.Point2D_F64;
 import java.util.Optional;
+import org.jspecify.annotations.Nullable;
 
 /**
  * Removes (and re-applies) lens distortion from image POINTS, keeping the camera matrix: a
@@ -22,11 +23,11 @@ import java.util.Optional;
 public final class LensCorrection {
   private static final LensCorrection IDENTITY = new LensCorrection(null);
 
-  private final CameraPinholeBrown camera;
-  private final ThreadLocal<Point2Transform2_F64> toUndistorted;
-  private final ThreadLocal<Point2Transform2_F64> toDistorted;
+  private final @Nullable CameraPinholeBrown camera;
+  private final @Nullable ThreadLocal<Point2Transform2_F64> toUndistorted;
+  private final @Nullable ThreadLocal<Point2Transform2_F64> toDistorted;
 
-  private LensCorrection(CameraPinholeBrown camera) {
+  private LensCorrection(@Nullable CameraPinholeBrown camera) {
     this.camera = camera;
     if (camera == null) {
       this.toUndistorted = null;
