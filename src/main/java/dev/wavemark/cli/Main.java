@@ -25,7 +25,8 @@ public final class Main implements Runnable {
    * The subcommands, in help order. Each capability adds its command here.
    */
   static Object[] subcommands() {
-    return new Object[] {new dev.wavemark.cli.theory.TheoryCommand()};
+    return new Object[] {new dev.wavemark.cli.theory.TheoryCommand(), new dev.wavemark.cli.render.RenderCommand(),
+        new dev.wavemark.cli.render.SamplesCommand(), new CalibrateCommand(), new AnalyzeCommand(), new DemoCommand()};
   }
 
   /** Builds the configured command line; tests call this with their own writers. */

@@ -34,7 +34,11 @@ public enum Problem {
   BAD_ARGUMENT("bad-argument", "%s"),
   // Pipeline
   FRAME_FAILED("frame-failed", "%s: analysis failed unexpectedly (%s); please report this with the frame"),
-  SAMPLES_MISSING("samples-missing", "%s: no sample run files (*.run.json) found; run demo from the wavemark folder or pass --samples DIR");
+  SAMPLES_MISSING("samples-missing", "%s: no sample run files (*.run.json) found; run demo from the wavemark folder or pass --samples DIR"),
+  // Calibration
+  TARGET_NOT_FOUND("target-not-found", "%s: no %s found; %s"),
+  // Correlations
+  OUTSIDE_CORRELATION("outside-correlation", "%s = %s is outside the range %s of %s");
 
   private final String code;
   private final String pattern;

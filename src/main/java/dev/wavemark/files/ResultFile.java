@@ -73,20 +73,33 @@ public record ResultFile(
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double nominalTheoryAngleDeg) {}
 
   /**
-   * The frame's Mach number and the estimates it combines. Extension: {@code consistent} is false
-   * when the estimates disagree beyond their uncertainties.
+   * The frame's Mach number and the estimates it combines. Extension: the consistency test
+   * between the estimates ({@code consistent} is false when they disagree beyond their
+   * uncertainties; {@code pValue} of the chi-square, {@code birgeRatio} sqrt(chi-square / dof));
+   * all three are absent with fewer than two estimates.
    */
   @JsonPropertyOrder({"value", "uncertainty", "estimates"})
   public record Mach(
       double value, double uncertainty, List<Estimate> estimates,
-      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Boolean consistent) {
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Boolean consistent,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double pValue,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double birgeRatio) {
     public Mach {
       estimates = List.copyOf(estimates);
     }
   }
 
-  /** One Mach estimate and the wave(s) it came {@code from}, e.g. "oblique-shock upper". */
-  public record Estimate(String from, double value, double uncertainty) {}
+  /**
+   * One Mach estimate and the wave(s) it came {@code from}, e.g. "oblique-shock upper
+   * leading-edge". Extension: the theory inverted ({@code method}), its {@code weight} in the
+   * frame's Mach number, and the positions in {@code waves[]} of the waves it used.
+   */
+  @JsonPropertyOrder({"from", "value", "uncertainty"})
+  public record Estimate(
+      String from, double value, double uncertainty,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable String method,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double weight,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable List<Integer> waves) {}
 
   /** The reflection verdict: {@code regular}, {@code mach} or {@code none}, predicted and observed. */
   public record Reflection(String verdict, String predicted, String observed, String reason) {}
@@ -95,12 +108,14 @@ public record ResultFile(
   public record FrameError(String code, String message) {}
 
   /**
-   * One line of the uncertainty budget: the {@code source} (e.g. "angle fit"), the standard
-   * uncertainty of that input in its {@code unit}, and the standard uncertainty it causes in the
-   * frame's Mach number. {@code systematic} sources are shared by every frame of the run and do not
-   * average out over a sequence.
+   * One line of the uncertainty budget: the {@code source} code (e.g. "angle-fit"), what it
+   * covers ({@code description}), the standard uncertainty of that input in its {@code unit}
+   * (angles in degrees), and the standard uncertainty it causes in the Mach number. The lines add
+   * in quadrature to the Mach number's uncertainty. {@code systematic} sources are common to every
+   * frame of a run and do not average out over a sequence.
    */
-  public record BudgetItem(String source, double inputUncertainty, String unit, double machUncertainty, boolean systematic) {}
+  public record BudgetItem(
+      String source, String description, double inputUncertainty, String unit, double machUncertainty, boolean systematic) {}
 
   /** The waves theory predicts at one Mach number ({@code basis}: "inferred" or "nominal"). */
   public record Prediction(String basis, double mach, List<PredictedWave> waves) {
@@ -113,28 +128,47 @@ public record ResultFile(
   public record PredictedWave(String kind, String side, String label, double angleDeg, double[] startPx, double[] endPx) {}
 
   /**
-   * The tunnel check: the measured Mach number against the nominal Mach number and against the
-   * Mach number from the pitot readings, each passed or failed against the tolerance. Absent parts
-   * are null.
+   * The tunnel check: the measured Mach number held against each reference the run file allows
+   * (the nominal Mach number, and the Mach numbers the pitot readings imply), each passed or
+   * failed against the tolerance. {@code verdict}: {@code pass} (every comparison with a tolerance
+   * passes), {@code fail}, or {@code no-tolerance}.
    */
-  @JsonInclude(JsonInclude.Include.NON_NULL)
-  public record TunnelCheck(
-      double measuredMach, @Nullable Double nominalMach, @Nullable Double machTolerance,
-      @Nullable Double nominalDeviation, @Nullable Boolean nominalPass,
-      @Nullable Double pitotMach, @Nullable String pitotFrom, @Nullable Double pitotDeviation, @Nullable Boolean pitotPass,
-      String verdict) {}
+  public record TunnelCheck(double measuredMach, double measuredUncertainty, List<Comparison> comparisons, List<String> notes,
+      String verdict) {
+    public TunnelCheck {
+      comparisons = List.copyOf(comparisons);
+      notes = List.copyOf(notes);
+    }
+  }
 
   /**
-   * The run as a whole. Contract fields first ({@code mach} is null when no frame was analysed;
-   * {@code nominalMach} when the run file gives none). Extension: the tolerance, the frame-to-frame
-   * scatter, and the tunnel check of the summary Mach number.
+   * One reference against the measured Mach number: {@code reference} is {@code nominal},
+   * {@code pitot/static}, {@code pitot/total} or {@code static/total}; {@code difference} is measured
+   * minus reference, {@code differenceInSigma} that over the combined standard uncertainty;
+   * {@code outcome} {@code pass}, {@code fail} or {@code no-tolerance}.
+   */
+  public record Comparison(String reference, double referenceMach, double difference, double differenceInSigma,
+      @Nullable Double tolerance, String outcome) {}
+
+  /**
+   * The run as a whole. Contract fields first ({@code mach} is null when no frame gave a Mach
+   * number; {@code nominalMach} when the run file gives none). Extension: the tolerance, the
+   * frame-to-frame scatter (sample standard deviation), the run's uncertainty budget, the tunnel
+   * check of the run's Mach number, and run-level warnings.
    */
   @JsonPropertyOrder({"mach", "nominalMach", "frames", "failedFrames"})
   public record Summary(
       @Nullable Measure mach, @Nullable Double nominalMach, int frames, int failedFrames,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double machTolerance,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double machScatter,
-      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable TunnelCheck tunnel) {}
+      @JsonInclude(JsonInclude.Include.NON_EMPTY) @Nullable List<BudgetItem> budget,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable TunnelCheck tunnel,
+      @JsonInclude(JsonInclude.Include.NON_EMPTY) @Nullable List<String> warnings) {
+    public Summary {
+      budget = budget == null ? null : List.copyOf(budget);
+      warnings = warnings == null ? null : List.copyOf(warnings);
+    }
+  }
 
   /** A value and its standard uncertainty. */
   public record Measure(double value, double uncertainty) {}

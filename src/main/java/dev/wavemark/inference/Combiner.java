@@ -21,7 +21,9 @@ import org.hipparchus.linear.SingularValueDecomposition;
  * estimates are strongly correlated), and its variance w^T C w is the exact propagation of every
  * input through that mean, so the budget lines add in quadrature to it. The consistency test is
  * the chi-square of the residuals r = M - M_hat with their own covariance (I - 1 w^T) C (I - 1 w^T)^T
- * through its pseudo-inverse (Hipparchus' SVD), with degrees of freedom its rank.
+ * through its pseudo-inverse (Hipparchus' SVD), with degrees of freedom its rank. When it fails,
+ * the estimate with the largest standardised residual is named and set aside and the rest tested
+ * again, until the rest agree (or two remain, both named).
  */
 final class Combiner {
   private Combiner() {}
@@ -31,10 +33,9 @@ final class Combiner {
   /**
    * @param sigma each input's standard uncertainty
    * @param alpha the test level: inconsistent when the chi-square's p-value falls below it
-   * @param zLimit standardised residual beyond which an estimate is named as disagreeing
    * @param describe text for each budget source
    */
-  static Optional<Combined> combine(List<Linear> est, ToDoubleFunction<Linear.Input> sigma, double alpha, double zLimit,
+  static Optional<Combined> combine(List<Linear> est, ToDoubleFunction<Linear.Input> sigma, double alpha,
       boolean scaleByBirge, Describer describe) {
     int n = est.size();
     if (n == 0) {
@@ -71,7 +72,7 @@ final class Combiner {
         g[k] += w[a] * j[a][k];
       }
     }
-    Consistency cons = consistency(est, c, w, mean, alpha, zLimit);
+    Consistency cons = consistency(est, c, alpha);
     List<BudgetLine> budget = budget(inputs, g, s, describe);
     double u = BudgetLine.total(budget);
     if (scaleByBirge && cons.birgeRatio() > 1 && Double.isFinite(cons.birgeRatio())) {
@@ -118,10 +119,56 @@ final class Combiner {
     return w;
   }
 
-  private static Consistency consistency(List<Linear> est, double[][] c, double[] w, double mean, double alpha, double zLimit) {
+  private static Consistency consistency(List<Linear> est, double[][] c, double alpha) {
     int n = est.size();
     if (n < 2) {
       return Consistency.UNTESTED;
+    }
+    List<Integer> all = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      all.add(i);
+    }
+    Test t = test(est, c, all);
+    boolean ok = t.p >= alpha;
+    List<String> bad = new ArrayList<>();
+    if (!ok) {
+      // Name the culprits one at a time: the worst standardised residual goes, and the rest is
+      // tested again, so that one far-off estimate does not drag every other one into the list.
+      List<Integer> rest = new ArrayList<>(all);
+      Test cur = t;
+      while (cur.p < alpha && rest.size() > 2) {
+        int worst = cur.worst;
+        bad.add(est.get(rest.get(worst)).from());
+        rest.remove(worst);
+        cur = test(est, c, rest);
+      }
+      if (cur.p < alpha && rest.size() == 2) {
+        // Two that disagree: nothing says which one is wrong.
+        rest.forEach(i -> bad.add(est.get(i).from()));
+      }
+    }
+    return new Consistency(t.chi2, t.dof, Math.sqrt(t.chi2 / t.dof), t.p, ok, bad);
+  }
+
+  private record Test(double chi2, int dof, double p, int worst) {}
+
+  /**
+   * The chi-square test of the estimates {@code idx}: residuals about their inverse-variance mean
+   * with the residuals' own covariance (I - 1 w^T) C (I - 1 w^T)^T through its pseudo-inverse, with
+   * degrees of freedom its rank; and the position in {@code idx} of the largest standardised residual.
+   */
+  private static Test test(List<Linear> est, double[][] cAll, List<Integer> idx) {
+    int n = idx.size();
+    double[][] c = new double[n][n];
+    for (int a = 0; a < n; a++) {
+      for (int b = 0; b < n; b++) {
+        c[a][b] = cAll[idx.get(a)][idx.get(b)];
+      }
+    }
+    double[] w = weights(c);
+    double mean = 0;
+    for (int a = 0; a < n; a++) {
+      mean += w[a] * est.get(idx.get(a)).mach();
     }
     double[][] a = new double[n][n];
     for (int i = 0; i < n; i++) {
@@ -133,7 +180,7 @@ final class Combiner {
     RealMatrix cov = am.multiply(MatrixUtils.createRealMatrix(c)).multiplyTransposed(am);
     double[] r = new double[n];
     for (int i = 0; i < n; i++) {
-      r[i] = est.get(i).mach() - mean;
+      r[i] = est.get(idx.get(i)).mach() - mean;
     }
     double scale = 0;
     for (int i = 0; i < n; i++) {
@@ -171,27 +218,17 @@ final class Combiner {
       dof = Math.max(dof, 1);
     }
     double p = Double.isInfinite(chi2) ? 0 : 1 - new ChiSquaredDistribution(dof).cumulativeProbability(chi2);
-    boolean ok = p >= alpha;
-    List<String> bad = new ArrayList<>();
-    if (!ok) {
-      int worst = 0;
-      double worstZ = -1;
-      for (int i = 0; i < n; i++) {
-        double v = cov.getEntry(i, i);
-        double z = v > 0 ? Math.abs(r[i]) / Math.sqrt(v) : (r[i] == 0 ? 0 : Double.POSITIVE_INFINITY);
-        if (z > zLimit) {
-          bad.add(est.get(i).from());
-        }
-        if (z > worstZ) {
-          worstZ = z;
-          worst = i;
-        }
-      }
-      if (bad.isEmpty()) {
-        bad.add(est.get(worst).from());
+    int worst = 0;
+    double worstZ = -1;
+    for (int i = 0; i < n; i++) {
+      double v = cov.getEntry(i, i);
+      double z = v > 0 ? Math.abs(r[i]) / Math.sqrt(v) : (r[i] == 0 ? 0 : Double.POSITIVE_INFINITY);
+      if (z > worstZ) {
+        worstZ = z;
+        worst = i;
       }
     }
-    return new Consistency(chi2, dof, Math.sqrt(chi2 / dof), p, ok, bad);
+    return new Test(chi2, dof, p, worst);
   }
 
   private static List<BudgetLine> budget(List<Linear.Input> inputs, double[] g, double[] s, Describer d) {

@@ -12,8 +12,9 @@ import java.util.List;
  * @param birgeRatio sqrt(chiSquare / degreesOfFreedom), 1 expected; 1 when untestable
  * @param pValue probability of a chi-square at least this large if the estimates agree; 1 when untestable
  * @param consistent false when pValue falls below the test level
- * @param disagreeing the {@code from} labels of the estimates whose standardised residual
- *     exceeds the limit (empty when consistent)
+ * @param disagreeing the {@code from} labels of the estimates that disagree (empty when
+ *     consistent): the worst standardised residual is named and set aside and the rest tested
+ *     again until the rest agree; when two remain that disagree, both are named
  */
 public record Consistency(
     double chiSquare, int degreesOfFreedom, double birgeRatio, double pValue, boolean consistent, List<String> disagreeing) {

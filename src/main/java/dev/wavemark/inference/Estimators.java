@@ -1,6 +1,7 @@
 package dev.wavemark.inference;
 
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.ConicalFlow;
 import dev.wavemark.core.gas.MachAngle;
 import dev.wavemark.core.gas.ObliqueShock;
 import dev.wavemark.core.gas.PrandtlMeyer;
@@ -25,7 +26,7 @@ import java.util.function.ToDoubleFunction;
  * <p>Waves met by the undisturbed freestream are inverted in closed form: an oblique shock by
  * theta-beta-M (weak branch) with the surface deflection the model sets, a Mach-wave family and
  * an expansion head by the Mach angle, an expansion tail by its Mach angle and the
- * Prandtl-Meyer function with the known turn. The deflection and the turn are read from the
+ * Prandtl-Meyer function with the known turn, a conical shock by the Taylor-Maccoll inverse. The deflection and the turn are read from the
  * theory pattern itself (theta(M, beta) of its shock, the change in its local flow direction), so
  * that the model's incidence convention lives in one place. Every other wave (behind a first shock
  * or fan, reflected, transmitted, conical) is inverted through the pattern: the Mach number at
@@ -80,6 +81,8 @@ final class Estimators {
           continue;
         } else if (e.kind() == WaveKind.OBLIQUE_SHOCK && freestream(e)) {
           out.add(obliqueShock(mRef, key, e, p.observed()));
+        } else if (e.kind() == WaveKind.CONICAL_SHOCK && freestream(e)) {
+          out.add(conicalShock(mRef, key, e, p.observed()));
         } else if (e.kind() == WaveKind.EXPANSION_HEAD && freestream(e)) {
           out.add(closedForm(key, MachEstimate.Method.MACH_ANGLE, List.of(p.observed()), List.of(),
               off -> MachAngle.machFrom(angle(p.observed(), e.localFlowDirectionRad(), off))));
@@ -143,6 +146,23 @@ final class Estimators {
         theta += dTheta[k] * off.getOrDefault(Linear.Input.model(k), 0.0);
       }
       return ObliqueShock.machFromAngles(angle(obs, e.localFlowDirectionRad(), off), theta, gammaOf(off));
+    });
+  }
+
+  /**
+   * A conical shock: the Taylor-Maccoll inverse (core.gas.ConicalFlow) with the cone angle the
+   * pattern's shock implies (exact at zero incidence; at incidence the side-view silhouette is
+   * taken as a cone of that effective angle).
+   */
+  private Linear conicalShock(double mRef, WaveKey key, ExpectedWave e, int obs) {
+    double cone0 = ConicalFlow.of(gamma).coneAngle(mRef, e.angleToFlowRad());
+    double[] dCone = modelDerivatives(mRef, pat -> ConicalFlow.of(gamma).coneAngle(mRef, need(key, pat).angleToFlowRad()));
+    return closedForm(key, MachEstimate.Method.TAYLOR_MACCOLL, List.of(obs), modelInputs(dCone), off -> {
+      double cone = cone0;
+      for (int k = 0; k < dCone.length; k++) {
+        cone += dCone[k] * off.getOrDefault(Linear.Input.model(k), 0.0);
+      }
+      return ConicalFlow.of(gammaOf(off)).machFromShockAngle(angle(obs, e.localFlowDirectionRad(), off), cone);
     });
   }
 

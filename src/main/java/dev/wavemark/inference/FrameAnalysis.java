@@ -1,6 +1,7 @@
 package dev.wavemark.inference;
 
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.ConicalFlow;
 import dev.wavemark.core.gas.ObliqueShock;
 import dev.wavemark.core.gas.ShockBranch;
 import dev.wavemark.core.geom.ImageAngles;
@@ -153,7 +154,7 @@ final class FrameAnalysis {
       List<String> now = keys(found, exp.get());
       Estimators.Built built = estimators.build(m, exp.get(), found);
       Optional<Combiner.Combined> c = Combiner.combine(built.estimates(), this::sigma, options.testLevel(),
-          options.disagreementSigma(), options.scaleByBirgeRatio(), new Describe());
+          options.scaleByBirgeRatio(), new Describe());
       inversionWarnings = built.warnings();
       pairs = found;
       if (c.isEmpty()) {
@@ -303,7 +304,9 @@ final class FrameAnalysis {
       out.add(new Finding.MissingWave(e));
     }
     for (int i = 0; i < observed.size(); i++) {
-      if (!matchedObs.contains(i) && !reference.isEmpty()) {
+      boolean stemOfAReflection = observed.get(i).kind() == WaveKind.MACH_STEM
+          && (run.model() instanceof BodyShape.ShockGenerator || run.model() instanceof BodyShape.TwinGenerators);
+      if (!matchedObs.contains(i) && !reference.isEmpty() && !stemOfAReflection) {
         out.add(new Finding.UnmatchedWave(i, observed.get(i).kind()));
       }
     }
@@ -317,7 +320,7 @@ final class FrameAnalysis {
       double max;
       double mLocal = m;
       if (s.conical()) {
-        continue; // judged once the conical detachment limit is available in core.gas
+        max = ConicalFlow.of(gamma).maxConeAngle(m).coneRad();
       } else if (Double.isFinite(s.behindFirstShockOf())) {
         if (s.behindFirstShockOf() > ObliqueShock.maxDeflection(m, gamma)) {
           continue; // the first ramp already detaches; reported on its own

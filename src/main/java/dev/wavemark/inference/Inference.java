@@ -19,6 +19,9 @@ import java.util.List;
  * {@link WavemarkException} only for arguments no picture can cause (a non-positive frame size).
  */
 public final class Inference {
+  /** The production theory: the model's full pattern, or its incident shocks where no regular reflection exists. */
+  private static final PatternSource PRODUCTION = Fallbacks.incidentShocksWhenNoRegularReflection(WavePattern::of);
+
   private Inference() {}
 
   /**
@@ -28,8 +31,6 @@ public final class Inference {
    *     the run file gives none; dry air's ideal-gas gamma changes by about that much between
    *     200 K and 300 K (from memory), and humidity adds a little more
    * @param testLevel the consistency test fails when the chi-square p-value is below this (default 0.01)
-   * @param disagreementSigma an estimate is named as disagreeing when its standardised residual
-   *     exceeds this (default 2.576, the two-sided 1% point of the normal distribution)
    * @param scaleByBirgeRatio scale the uncertainty by the Birge ratio when it exceeds 1 (default
    *     true, Particle Data Group practice)
    * @param maxIterations match, invert, re-predict cycles at most (default 8)
@@ -38,14 +39,13 @@ public final class Inference {
    * @param refinedAngleWindowRad angle window once re-predicted at the inferred Mach number (default 3°)
    */
   public record Options(
-      double gammaUncertainty, double testLevel, double disagreementSigma, boolean scaleByBirgeRatio,
+      double gammaUncertainty, double testLevel, boolean scaleByBirgeRatio,
       int maxIterations, double initialAngleWindowRad, double refinedAngleWindowRad) {
-    public static final Options DEFAULTS = new Options(0.002, 0.01, 2.576, true, 8, Math.toRadians(10), Math.toRadians(3));
+    public static final Options DEFAULTS = new Options(0.002, 0.01, true, 8, Math.toRadians(10), Math.toRadians(3));
 
     public Options {
       Checks.inClosed("gammaUncertainty", gammaUncertainty, 0, 0.2);
       Checks.inOpen("testLevel", testLevel, 0, 1);
-      Checks.positive("disagreementSigma", disagreementSigma);
       Checks.inClosed("maxIterations", maxIterations, 1, 100);
       Checks.inOpen("initialAngleWindowRad", initialAngleWindowRad, 0, 0.5 * Math.PI);
       Checks.inOpen("refinedAngleWindowRad", refinedAngleWindowRad, 0, 0.5 * Math.PI);
@@ -65,12 +65,12 @@ public final class Inference {
    * @throws WavemarkException bad-argument for a non-positive picture size; nothing a picture can cause
    */
   public static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx) {
-    return ofFrame(run, observed, widthPx, heightPx, Options.DEFAULTS, WavePattern::of);
+    return ofFrame(run, observed, widthPx, heightPx, Options.DEFAULTS, PRODUCTION);
   }
 
   /** As {@link #ofFrame(RunSpec, List, int, int)} with explicit options. */
   public static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx, Options options) {
-    return ofFrame(run, observed, widthPx, heightPx, options, WavePattern::of);
+    return ofFrame(run, observed, widthPx, heightPx, options, PRODUCTION);
   }
 
   static FrameInference ofFrame(RunSpec run, List<ObservedWave> observed, int widthPx, int heightPx, PatternSource patterns) {

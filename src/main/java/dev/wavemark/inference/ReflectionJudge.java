@@ -1,6 +1,7 @@
 package dev.wavemark.inference;
 
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.ShockReflection;
 import dev.wavemark.core.model.BodyShape;
 import dev.wavemark.core.model.WaveKind;
 import java.util.Locale;
@@ -9,7 +10,7 @@ import java.util.Set;
 
 /**
  * The reflection verdict: theory's prediction from the detachment and von Neumann criteria at
- * the Mach number judged, against what the picture shows (a Mach stem, or a reflected or
+ * the Mach number judged ({@link ShockReflection#judge}), against what the picture shows (a Mach stem, or a reflected or
  * transmitted shock without one).
  *
  * <p>Crossing shocks from twin generators are judged on the criteria of a symmetric reflection
@@ -46,16 +47,21 @@ final class ReflectionJudge {
     double m = mach.get();
     double vonNeumann;
     double detachment;
+    ReflectionVerdict.Kind predicted;
     try {
-      detachment = ReflectionCriteria.detachmentDeflection(m, gamma);
-      vonNeumann = ReflectionCriteria.vonNeumannDeflection(m, gamma);
+      ShockReflection.Judgement j = ShockReflection.judge(m, deflection, gamma);
+      detachment = j.detachmentDeflectionRad();
+      vonNeumann = j.vonNeumannDeflectionRad().orElse(detachment);
+      predicted = switch (j.verdict()) {
+        case REGULAR -> ReflectionVerdict.Kind.REGULAR;
+        case DUAL_SOLUTION -> ReflectionVerdict.Kind.DUAL_SOLUTION;
+        case MACH -> ReflectionVerdict.Kind.MACH;
+      };
     } catch (WavemarkException e) {
       return new ReflectionVerdict(observed, ReflectionVerdict.Kind.NONE, observed,
-          "the reflection criteria at M = " + WavemarkException.num(m) + " could not be formed (" + e.getMessage() + "); " + seenText,
-          Optional.empty());
+          "the reflection criteria at the " + basis + " M = " + WavemarkException.num(m) + " could not be formed ("
+              + e.getMessage() + "); " + seenText, Optional.empty());
     }
-    ReflectionVerdict.Kind predicted = deflection > detachment ? ReflectionVerdict.Kind.MACH
-        : deflection < vonNeumann ? ReflectionVerdict.Kind.REGULAR : ReflectionVerdict.Kind.DUAL_SOLUTION;
     String rule = switch (predicted) {
       case MACH -> "beyond the detachment criterion %.2f° (von Neumann %.2f°): Mach reflection";
       case REGULAR -> vonNeumann < detachment ? "below the von Neumann criterion %2$.2f° (detachment %1$.2f°): regular reflection"

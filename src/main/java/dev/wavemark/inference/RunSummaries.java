@@ -53,10 +53,14 @@ final class RunSummaries {
       mean += w[i] * m[i];
       fitVar += w[i] * w[i] * own[i] * own[i];
     }
+    double plain = 0;
+    for (double v : m) {
+      plain += v / n;
+    }
     double ss = 0;
     double chi2 = 0;
     for (int i = 0; i < n; i++) {
-      ss += (m[i] - mean) * (m[i] - mean);
+      ss += (m[i] - plain) * (m[i] - plain);
       if (own[i] > 0) {
         chi2 += (m[i] - mean) * (m[i] - mean) / (own[i] * own[i]);
       }

@@ -13,7 +13,7 @@ import java.util.Optional;
  * quadrature to the frame-averaged common parts; {@link #budget} lists them.
  *
  * @param mach the run's Mach number; empty when no frame gave one
- * @param frameScatter sample standard deviation of the frames' Mach numbers (0 for one frame)
+ * @param frameScatter sample standard deviation of the frames' Mach numbers about their plain mean (0 for one frame)
  * @param frames frames given (analysed and failed)
  * @param framesWithMach frames that gave a Mach number
  * @param failedFrames frames that could not be analysed at all

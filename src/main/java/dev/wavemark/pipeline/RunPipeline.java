@@ -6,10 +6,13 @@ import dev.wavemark.core.model.Calibration;
 import dev.wavemark.core.model.RunSpec;
 import dev.wavemark.files.CalibrationFile;
 import dev.wavemark.files.ResultFile;
+import dev.wavemark.files.ResultFrames;
 import dev.wavemark.files.RunFile;
 import dev.wavemark.imaging.io.Frame;
 import dev.wavemark.imaging.io.FrameRef;
 import dev.wavemark.imaging.io.FrameSequence;
+import dev.wavemark.inference.FrameInference;
+import dev.wavemark.inference.Inference;
 import dev.wavemark.report.FrameSelection;
 import dev.wavemark.report.Picture;
 import dev.wavemark.report.Report;
@@ -18,6 +21,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import org.jspecify.annotations.Nullable;
@@ -43,26 +47,35 @@ final class RunPipeline {
       annotated.add(refs.get(i).index());
     }
     Map<Integer, Picture> pictures = new ConcurrentHashMap<>();
-    List<ResultFile.Frame> frames;
+    List<FrameAnalyser.Analysed> done;
     try (Progress progress = Progress.of(options.progress(), spec.label(), refs.size())) {
-      frames = ParallelFrames.run(refs.size(), options.threads(), i -> {
+      done = ParallelFrames.run(refs.size(), options.threads(), i -> {
         FrameRef ref = refs.get(i);
         try {
           Frame frame = seq.read(ref);
           if (pictured.contains(i)) {
             pictures.put(ref.index(), Display.of(frame.image()));
           }
-          return analyser.analyse(frame);
+          FrameAnalyser.Analysed a = analyser.analyse(frame);
+          return new FrameAnalyser.Analysed(a.entry(), a.inference().map(FrameAnalyser::slim));
         } catch (WavemarkException e) {
-          return failed(ref, e.code(), e.getMessage());
+          return new FrameAnalyser.Analysed(failed(ref, e.code(), e.getMessage()), Optional.empty());
         } catch (RuntimeException e) {
           // A bug met on one frame must not lose the others: record it as that frame's error.
           WavemarkException w = new WavemarkException(e, Problem.FRAME_FAILED, ref.label(), e.toString());
-          return failed(ref, w.code(), w.getMessage());
+          return new FrameAnalyser.Analysed(failed(ref, w.code(), w.getMessage()), Optional.empty());
         }
       }, progress::step);
     }
-    ResultFile.Summary summary = RunSummary.of(frames, spec.tunnel(), spec.gas().gamma());
+    List<ResultFile.Frame> frames = new ArrayList<>(done.size());
+    List<FrameInference> inferences = new ArrayList<>();
+    int failed = 0;
+    for (FrameAnalyser.Analysed a : done) {
+      frames.add(a.entry());
+      a.inference().ifPresent(inferences::add);
+      failed += a.entry().failed() ? 1 : 0;
+    }
+    ResultFile.Summary summary = ResultFrames.summary(Inference.summarise(spec, inferences, failed), spec);
     ResultFile result = new ResultFile(spec.label(), new ResultFile.Tool("wavemark", version), frames, summary,
         settings(runFile, rf, spec, annotated));
     Path html = Report.write(new Report.Input(result, spec.model(), spec.calibration().flowDirectionRad(), pictures,

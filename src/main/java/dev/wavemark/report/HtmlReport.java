@@ -27,6 +27,10 @@ final class HtmlReport {
 
   private HtmlReport() {}
 
+  static String when(Instant t) {
+    return WHEN.format(t);
+  }
+
   static byte[] render(String template, Object page) {
     StringOutput out = new StringOutput();
     ENGINE.render(template, page, out);
@@ -90,16 +94,33 @@ final class HtmlReport {
     if (t == null) {
       return out;
     }
-    String tol = t.machTolerance() == null ? "not given" : "\u00b1 " + Fmt.fixed(t.machTolerance(), 4);
-    if (t.nominalMach() != null) {
-      out.add(new ReportPage.Check("nominal Mach number (run file)", Fmt.fixed(t.nominalMach(), 4),
-          signed(t.nominalDeviation()), tol, status(t.nominalPass()), verdict(t.nominalPass())));
-    }
-    if (t.pitotMach() != null) {
-      out.add(new ReportPage.Check("pitot readings" + (t.pitotFrom() == null ? "" : " (" + t.pitotFrom() + ")"),
-          Fmt.fixed(t.pitotMach(), 4), signed(t.pitotDeviation()), tol, status(t.pitotPass()), verdict(t.pitotPass())));
+    for (ResultFile.Comparison c : t.comparisons()) {
+      String tol = c.tolerance() == null ? "not given" : "\u00b1 " + Fmt.fixed(c.tolerance(), 4);
+      String dev = signed(c.difference()) + (Double.isFinite(c.differenceInSigma())
+          ? " (" + Fmt.fixed(c.differenceInSigma(), 1) + " \u03c3)" : "");
+      String status = switch (c.outcome()) {
+        case "pass" -> "pass";
+        case "fail" -> "fail";
+        default -> "info";
+      };
+      String verdict = switch (c.outcome()) {
+        case "pass" -> "within tolerance";
+        case "fail" -> "outside tolerance";
+        default -> "no tolerance given";
+      };
+      out.add(new ReportPage.Check(reference(c.reference()), Fmt.fixed(c.referenceMach(), 4), dev, tol, status, verdict));
     }
     return out;
+  }
+
+  private static String reference(String code) {
+    return switch (code) {
+      case "nominal" -> "nominal Mach number (run file)";
+      case "pitot/static" -> "pitot over static pressure (Rayleigh pitot formula)";
+      case "pitot/total" -> "pitot over total pressure (normal-shock total-pressure ratio)";
+      case "static/total" -> "static over total pressure (isentropic)";
+      default -> code;
+    };
   }
 
   private static String signed(@Nullable Double d) {
@@ -122,7 +143,7 @@ final class HtmlReport {
     List<ReportPage.WaveRow> waves = new ArrayList<>();
     for (int i = 0; i < f.waves().size(); i++) {
       ResultFile.Wave w = f.waves().get(i);
-      ResultFile.Estimate e = Tables.estimateFor(f, w);
+      ResultFile.Estimate e = Tables.estimateFor(f, i);
       waves.add(new ReportPage.WaveRow("W" + (i + 1), w.kind(), w.side() == null ? Fmt.UNKNOWN : w.side(),
           w.label() == null ? Fmt.UNKNOWN : w.label(), Fmt.pm(w.angleDeg(), w.uncertaintyDeg(), 3),
           Fmt.fixed(w.theoryAngleDeg(), 3), Fmt.fixed(w.nominalTheoryAngleDeg(), 3), Fmt.fixed(w.deflectionDeg(), 2),
@@ -151,7 +172,7 @@ final class HtmlReport {
     }
     for (ResultFile.BudgetItem b : items) {
       double share = total2 > 0 ? 100 * b.machUncertainty() * b.machUncertainty() / total2 : Double.NaN;
-      budget.add(new ReportPage.BudgetRow(b.source(), Fmt.fixed(b.inputUncertainty(), 4) + " " + b.unit(),
+      budget.add(new ReportPage.BudgetRow(b.description(), Fmt.fixed(b.inputUncertainty(), 4) + " " + b.unit(),
           Fmt.fixed(b.machUncertainty(), 5), Fmt.fixed(share, 1) + " %", b.systematic()));
     }
     List<String> predictions = new ArrayList<>();

@@ -53,7 +53,7 @@ final class ResultCsv {
         r.add("");
       }
     } else {
-      ResultFile.Estimate e = Tables.estimateFor(f, w);
+      ResultFile.Estimate e = Tables.estimateFor(f, i);
       r.add(Integer.toString(i));
       r.add(w.kind());
       r.add(w.side() == null ? "" : w.side());

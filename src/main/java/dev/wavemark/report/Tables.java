@@ -8,16 +8,18 @@ final class Tables {
   private Tables() {}
 
   /**
-   * The Mach estimate that came from a wave: the estimate whose {@code from} names the wave's
-   * kind and side (the contract's "kind side" form), or null.
+   * The Mach estimate that came from the wave at {@code waveIndex} alone: the estimate that lists
+   * only that wave, or, for results without wave lists, the one whose {@code from} is the wave's
+   * "kind side" (the contract's form); null when none.
    */
-  static ResultFile.@Nullable Estimate estimateFor(ResultFile.Frame f, ResultFile.Wave w) {
+  static ResultFile.@Nullable Estimate estimateFor(ResultFile.Frame f, int waveIndex) {
     if (f.mach() == null) {
       return null;
     }
+    ResultFile.Wave w = f.waves().get(waveIndex);
     String key = w.side() == null ? w.kind() : w.kind() + " " + w.side();
     for (ResultFile.Estimate e : f.mach().estimates()) {
-      if (e.from().equals(key)) {
+      if (e.waves() != null ? e.waves().equals(java.util.List.of(waveIndex)) : e.from().equals(key)) {
         return e;
       }
     }

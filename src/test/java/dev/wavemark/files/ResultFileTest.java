@@ -25,13 +25,14 @@ class ResultFileTest {
     double beta = Math.toDegrees(ObliqueShock.beta(2.0, Math.toRadians(10), ShockBranch.WEAK, 1.4));
     ResultFile.Wave w = new ResultFile.Wave("oblique-shock", "upper", beta, 0.04, new double[] {212, 384}, new double[] {700, 0},
         812, 0.31, "upper leading-edge shock", false, 10.0, beta, null);
-    ResultFile.Mach m = new ResultFile.Mach(2.0, uncertainty, List.of(new ResultFile.Estimate("oblique-shock upper", 2.0, 0.008)), null);
+    ResultFile.Mach m = new ResultFile.Mach(2.0, uncertainty,
+        List.of(new ResultFile.Estimate("oblique-shock upper", 2.0, 0.008, null, null, null)), null, null, null);
     ResultFile.Frame ok = new ResultFile.Frame(0, "frame-0001.png", List.of(w), m,
         new ResultFile.Reflection("regular", "regular", "regular", "below the detachment criterion"), List.of(), null,
-        List.of(new ResultFile.BudgetItem("angle fit", 0.04, "deg", 0.004, false)), null, null);
+        List.of(new ResultFile.BudgetItem("angle-fit", "angle fit, 1 wave", 0.04, "deg", 0.004, false)), null, null);
     ResultFile.Frame bad = new ResultFile.Frame(1, "frame-0002.png", List.of(), null, null, List.of(),
         new ResultFile.FrameError("image-corrupt", "frame-0002.png: not a readable image (truncated)"), null, null, null);
-    ResultFile.Summary s = new ResultFile.Summary(new ResultFile.Measure(2.0, 0.004), 2.0, 2, 1, null, null, null);
+    ResultFile.Summary s = new ResultFile.Summary(new ResultFile.Measure(2.0, 0.004), 2.0, 2, 1, null, null, null, null, null);
     return new ResultFile("label", new ResultFile.Tool("wavemark", "0.1.0"), List.of(ok, bad), s, null);
   }
 

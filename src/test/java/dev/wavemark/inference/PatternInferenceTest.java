@@ -38,7 +38,9 @@ class PatternInferenceTest {
         Arguments.of(new BodyShape.ExpansionCorner(Math.toRadians(10), new Point2(400, 600), LOWER_WALL), 2.0),
         Arguments.of(new BodyShape.DoubleRamp(Math.toRadians(8), new Point2(300, 600), Math.toRadians(8), new Point2(450, 600), LOWER_WALL), 3.0),
         Arguments.of(new BodyShape.ShockGenerator(Math.toRadians(8), new Point2(150, 250), LOWER_WALL), 2.5),
-        Arguments.of(new BodyShape.Freestream(Optional.of(LOWER_WALL)), 1.8));
+        Arguments.of(new BodyShape.Freestream(Optional.of(LOWER_WALL)), 1.8),
+        Arguments.of(new BodyShape.Cone(Math.toRadians(10), 0, le, 300), 2.0),
+        Arguments.of(new BodyShape.TwinGenerators(new Point2(150, 150), new Point2(150, 618), Math.toRadians(7), Math.toRadians(7)), 2.5));
   }
 
   @ParameterizedTest(name = "{0} at M={1}")
@@ -57,5 +59,23 @@ class PatternInferenceTest {
       assertTrue(f.consistency().consistent(), msg);
       assertEquals(f.mach().get().uncertainty(), BudgetLine.total(f.budget()), 1e-12, msg);
     }
+  }
+
+  @org.junit.jupiter.api.Test
+  void oneShiftedWaveFiresTheConsistencyWarningAndIsNamed() {
+    BodyShape shape = new BodyShape.Diamond(Math.toRadians(6), 0, Fixtures.LE, 300);
+    RunSpec run = Fixtures.run(shape, 0, Math.toRadians(0.02), Math.toRadians(0.02), Fixtures.nominal(2.2));
+    List<ExpectedWave> exp = WavePattern.of(shape, 2.2, 1.4, 0, Fixtures.W, Fixtures.H);
+    List<ObservedWave> obs = new ArrayList<>();
+    for (ExpectedWave e : exp) {
+      // The lower trailing-edge shock is 0.5° (ten standard uncertainties) off.
+      boolean shifted = e.side() == Side.LOWER && e.feature() == dev.wavemark.core.model.Feature.TRAILING_EDGE;
+      obs.add(Fixtures.along(e, shifted ? Math.toRadians(0.5) : 0, Math.toRadians(0.05)));
+    }
+    FrameInference f = Inference.ofFrame(run, obs, Fixtures.W, Fixtures.H);
+    assertTrue(!f.consistency().consistent(), f.consistency().toString());
+    assertEquals(List.of("oblique-shock lower trailing-edge"), f.consistency().disagreeing());
+    assertTrue(f.warnings().stream().anyMatch(w -> w.code() == Warning.Code.INCONSISTENT_ESTIMATES
+        && w.message().contains("oblique-shock lower trailing-edge")), f.warnings().toString());
   }
 }

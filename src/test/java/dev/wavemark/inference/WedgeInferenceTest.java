@@ -151,6 +151,16 @@ class WedgeInferenceTest {
     assertTrue(FrameAnalysis.detached(new BodyShape.Wedge(Math.toRadians(22.7), 0, Fixtures.LE, 400), 2.0, "nominal", 1.4).isEmpty());
   }
 
+  @org.junit.jupiter.api.Test
+  void coneDetachesBeyondTheConicalLimit() {
+    // The largest cone half-angle with an attached shock at M = 2 is about 40.5°
+    // (NACA Report 1135, Chart 5, from memory); read to about 0.3°.
+    List<Finding> f = FrameAnalysis.detached(new BodyShape.Cone(Math.toRadians(41.5), 0, Fixtures.LE, 300), 2.0, "nominal", 1.4);
+    assertEquals(1, f.size());
+    assertEquals(40.5, Math.toDegrees(((Finding.Detached) f.get(0)).maxDeflectionRad()), 0.3);
+    assertTrue(FrameAnalysis.detached(new BodyShape.Cone(Math.toRadians(39.5), 0, Fixtures.LE, 300), 2.0, "nominal", 1.4).isEmpty());
+  }
+
   private static ObservedWave rotateTo(ObservedWave o, double dir) {
     var l = o.line();
     return new ObservedWave(o.kind(), o.side(), new dev.wavemark.core.geom.FittedLine(l.centroid(), dir,

@@ -45,12 +45,13 @@ final class Fixtures {
     List<ResultFile.Wave> waves = List.of(wave("upper", beta, 0.04, 220), wave("lower", beta, 0.05, 220));
     double m = ObliqueShock.machFromAngles(Math.toRadians(beta), Math.toRadians(WEDGE_DEG), GAMMA);
     List<ResultFile.Estimate> est = List.of(
-        new ResultFile.Estimate("oblique-shock upper", m, 0.008), new ResultFile.Estimate("oblique-shock lower", m, 0.009));
-    ResultFile.Mach mm = new ResultFile.Mach(m, 0.006, est, true);
+        new ResultFile.Estimate("oblique-shock upper leading-edge", m, 0.008, "theta-beta-M", 0.56, List.of(0)),
+        new ResultFile.Estimate("oblique-shock lower leading-edge", m, 0.009, "theta-beta-M", 0.44, List.of(1)));
+    ResultFile.Mach mm = new ResultFile.Mach(m, 0.006, est, true, 0.8, 0.3);
     List<ResultFile.BudgetItem> budget = List.of(
-        new ResultFile.BudgetItem("angle fit", 0.04, "deg", 0.004, false),
-        new ResultFile.BudgetItem("flow direction", 0.05, "deg", 0.003, true),
-        new ResultFile.BudgetItem("model angle", 0.05, "deg", 0.003, true));
+        new ResultFile.BudgetItem("angle-fit", "angle fit, 2 waves", 0.04, "deg", 0.004, false),
+        new ResultFile.BudgetItem("flow-direction", "flow direction", 0.05, "deg", 0.003, true),
+        new ResultFile.BudgetItem("model-angle", "model angle", 0.05, "deg", 0.003, true));
     List<ResultFile.PredictedWave> pw = new ArrayList<>();
     for (ResultFile.Wave w : waves) {
       pw.add(new ResultFile.PredictedWave(w.kind(), w.side(), w.label(), w.theoryAngleDeg(), w.startPx(), w.endPx()));
@@ -67,9 +68,12 @@ final class Fixtures {
   static ResultFile result(String label, List<ResultFile.Frame> frames) {
     int failed = (int) frames.stream().filter(ResultFile.Frame::failed).count();
     ResultFile.Frame first = frames.stream().filter(f -> !f.failed()).findFirst().orElseThrow();
-    ResultFile.Summary s = new ResultFile.Summary(new ResultFile.Measure(first.mach().value(), 0.004), MACH, frames.size(), failed,
-        0.02, 0.0, new ResultFile.TunnelCheck(first.mach().value(), MACH, 0.02, first.mach().value() - MACH, true,
-            null, null, null, null, "pass"));
+    double m = first.mach().value();
+    ResultFile.TunnelCheck check = new ResultFile.TunnelCheck(m, 0.004,
+        List.of(new ResultFile.Comparison("nominal", MACH, m - MACH, (m - MACH) / 0.004, 0.02, Math.abs(m - MACH) <= 0.02 ? "pass" : "fail")),
+        List.of(), Math.abs(m - MACH) <= 0.02 ? "pass" : "fail");
+    ResultFile.Summary s = new ResultFile.Summary(new ResultFile.Measure(m, 0.004), MACH, frames.size(), failed,
+        0.02, null, frames.get(0).budget(), check, List.of());
     ModelJson model = new ModelJson("wedge", WEDGE_DEG, 0.0, LEADING_EDGE.clone(), 200.0, 0.05, null, null, null, null, null, null);
     ResultFile.Settings settings = new ResultFile.Settings("wedge.run.json", GAMMA, "schlieren-vertical-edge", model, null, null,
         List.of("frame-0001.png"), null, null, 0.05, null);

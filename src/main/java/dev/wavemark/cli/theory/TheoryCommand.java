@@ -18,6 +18,12 @@ import picocli.CommandLine.Command;
         MachAngleCommand.class,
         PrandtlMeyerCommand.class,
         ObliqueShockCommand.class,
+        ConeCommand.class,
+        StandoffCommand.class,
+        ShockExpansionCommand.class,
+        ReflectionCommand.class,
+        ShockCrossingCommand.class,
+        DoubleRampCommand.class,
     })
 public final class TheoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

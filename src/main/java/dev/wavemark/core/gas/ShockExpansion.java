@@ -147,6 +147,9 @@ public final class ShockExpansion {
       double mach, double alphaRad, double gamma, List<Panel> upper, List<Panel> lower,
       List<VertexWave> waves, TrailingEdge trailingEdge, Coefficients coefficients, Coefficients linear) {
     public Solution {
+      Checks.supersonic(mach, "shock-expansion theory");
+      Checks.finite("angle of attack (rad)", alphaRad);
+      Gas.check(gamma);
       upper = List.copyOf(upper);
       lower = List.copyOf(lower);
       waves = List.copyOf(waves);

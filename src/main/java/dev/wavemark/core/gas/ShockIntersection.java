@@ -32,6 +32,9 @@ public final class ShockIntersection {
   public record Opposite(
       double m1, Turn upperIncident, Turn lowerIncident, Turn upperTransmitted, Turn lowerTransmitted,
       SlipLine slipLine) {
+    public Opposite {
+      Checks.supersonic(m1, "a shock crossing");
+    }
 
     /** Upper incident shock line, pointing downstream: -beta2. */
     public double upperIncidentDirectionRad() {
@@ -67,6 +70,9 @@ public final class ShockIntersection {
    *     two ramp shocks and the reflected wave
    */
   public record SameFamily(double m1, Turn first, Turn second, Turn merged, Turn reflected, SlipLine slipLine) {
+    public SameFamily {
+      Checks.supersonic(m1, "a shock merging");
+    }
 
     /** The first shock's line from the first corner: beta1. */
     public double firstDirectionRad() {

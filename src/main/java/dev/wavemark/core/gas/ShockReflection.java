@@ -4,6 +4,7 @@ import dev.wavemark.core.Problem;
 import dev.wavemark.core.WavemarkException;
 import dev.wavemark.core.numeric.Checks;
 import dev.wavemark.core.numeric.Roots;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -43,6 +44,8 @@ public final class ShockReflection {
    */
   public record Regular(double m1, double thetaRad, Turn incident, Turn reflected, double reflectedAngleToWallRad) {
     public Regular {
+      Checks.supersonic(m1, "a regular reflection");
+      Checks.finite("deflection (rad)", thetaRad);
       Checks.finite("reflected shock angle to the wall (rad)", reflectedAngleToWallRad);
     }
 
@@ -80,6 +83,8 @@ public final class ShockReflection {
    */
   public record Criterion(double m1, double gamma, double incidentAngleRad, double deflectionRad) {
     public Criterion {
+      Checks.supersonic(m1, "a reflection criterion");
+      Gas.check(gamma);
       Checks.finite("incident shock angle (rad)", incidentAngleRad);
       Checks.finite("deflection (rad)", deflectionRad);
     }
@@ -92,7 +97,14 @@ public final class ShockReflection {
    *     von Neumann condition has no solution short of detachment
    */
   public record Judgement(
-      ReflectionVerdict verdict, double detachmentDeflectionRad, OptionalDouble vonNeumannDeflectionRad) {}
+      ReflectionVerdict verdict, double detachmentDeflectionRad, OptionalDouble vonNeumannDeflectionRad) {
+    public Judgement {
+      Checks.finite("detachment deflection (rad)", detachmentDeflectionRad);
+      if (vonNeumannDeflectionRad.isPresent()) {
+        Checks.finite("von Neumann deflection (rad)", vonNeumannDeflectionRad.getAsDouble());
+      }
+    }
+  }
 
   /**
    * The regular reflection for deflection theta in M1.
@@ -152,6 +164,21 @@ public final class ShockReflection {
   }
 
   /**
+   * The von Neumann criterion where it exists (above {@link #dualSolutionThresholdMach}), else
+   * empty; cheaper than computing the threshold first.
+   */
+  public static Optional<Criterion> vonNeumannIfAny(double m1, double gamma) {
+    try {
+      return Optional.of(vonNeumann(m1, gamma));
+    } catch (WavemarkException e) {
+      if (e.problem() == Problem.NO_SOLUTION) {
+        return Optional.empty();
+      }
+      throw e;
+    }
+  }
+
+  /**
    * The Mach number at which the von Neumann and detachment criteria coincide; the dual-solution
    * domain exists only above it (about 2.20 for gamma = 1.4, Ben-Dor, sec. 1.5, from memory).
    */
@@ -175,8 +202,8 @@ public final class ShockReflection {
     Checks.inOpen("deflection (rad)", thetaRad, 0, 0.5 * Math.PI);
     Turn.of(m1, thetaRad, gamma);
     Criterion d = detachment(m1, gamma);
-    OptionalDouble vn = m1 > dualSolutionThresholdMach(gamma)
-        ? OptionalDouble.of(vonNeumann(m1, gamma).deflectionRad()) : OptionalDouble.empty();
+    Optional<Criterion> n = vonNeumannIfAny(m1, gamma);
+    OptionalDouble vn = n.isPresent() ? OptionalDouble.of(n.get().deflectionRad()) : OptionalDouble.empty();
     ReflectionVerdict v;
     if (thetaRad > d.deflectionRad()) {
       v = ReflectionVerdict.MACH;

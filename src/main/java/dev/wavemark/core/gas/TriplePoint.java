@@ -39,6 +39,8 @@ public record TriplePoint(
   private static final int SCAN_STEPS = 400;
 
   public TriplePoint {
+    Checks.supersonic(m1, "a triple point");
+    Checks.finite("deflection (rad)", thetaRad);
     Checks.finite("incident shock angle (rad)", incidentAngleRad);
     Checks.finite("reflected shock angle (rad)", reflectedAngleToFlowRad);
     Checks.finite("reflected deflection (rad)", reflectedDeflectionRad);

@@ -1,10 +1,7 @@
 package dev.wavemark.core.model;
 
-import dev.wavemark.core.gas.Isentropic;
-import dev.wavemark.core.gas.MachAngle;
-import dev.wavemark.core.gas.ObliqueShock;
-import dev.wavemark.core.gas.PrandtlMeyer;
-import dev.wavemark.core.gas.ShockBranch;
+import dev.wavemark.core.gas.Turn;
+import dev.wavemark.core.gas.TurnKind;
 import dev.wavemark.core.geom.ImageAngles;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.WavePattern.Element;
@@ -49,33 +46,31 @@ final class PatternBuilder {
   /**
    * The wave made where a surface turns a uniform flow by {@code thetaRad} towards side
    * {@code sign} (+1 upper, -1 lower): theta &gt; 0 compresses (weak oblique shock), theta &lt; 0
-   * expands (centred Prandtl-Meyer fan).
+   * expands (centred Prandtl-Meyer fan); the physics is {@link Turn#of}.
    */
   Turned turn(State before, Point2 at, int sign, double thetaRad, Feature feature, String where) {
+    return turn(before, at, sign, thetaRad, feature, where, WaveKind.OBLIQUE_SHOCK);
+  }
+
+  /** As above, naming the kind a shock is given (an oblique, reflected or transmitted shock). */
+  Turned turn(State before, Point2 at, int sign, double thetaRad, Feature feature, String where, WaveKind shockKind) {
     Side side = sign > 0 ? Side.UPPER : Side.LOWER;
     if (Math.abs(thetaRad) < NO_TURN) {
       return new Turned(null, before);
     }
-    if (thetaRad > 0) {
-      ObliqueShock.Solution s = ObliqueShock.fromDeflection(before.mach(), thetaRad, ShockBranch.WEAK, gamma);
-      double dir = ImageAngles.wrap(before.directionRad() + sign * s.betaRad());
-      State after = new State(s.m2(), ImageAngles.wrap(before.directionRad() + sign * thetaRad),
-          before.density() * s.densityRatio(), before.pressure() * s.pressureRatio());
-      ExpectedWave w = wave(WaveKind.OBLIQUE_SHOCK, side, s.betaRad(), before.directionRad(), dir, at, feature, where + " shock");
+    Turn t = Turn.of(before.mach(), thetaRad, gamma);
+    double afterDir = ImageAngles.wrap(before.directionRad() + sign * thetaRad);
+    State after = new State(t.machDownstream(), afterDir, before.density() * t.densityRatio(),
+        before.pressure() * t.pressureRatio());
+    if (t.kind() == TurnKind.SHOCK) {
+      double dir = ImageAngles.wrap(before.directionRad() + sign * t.headAngleRad());
+      ExpectedWave w = wave(shockKind, side, t.headAngleRad(), before.directionRad(), dir, at, feature, where + " shock");
       return new Turned(new Shock(w, before, after), after);
     }
-    double turn = -thetaRad;
-    double m2 = PrandtlMeyer.inverse(PrandtlMeyer.nu(before.mach(), gamma) + turn, gamma);
-    double afterDir = ImageAngles.wrap(before.directionRad() - sign * turn);
-    double mu1 = MachAngle.of(before.mach());
-    double mu2 = MachAngle.of(m2);
-    double rhoRatio = Isentropic.densityRatio(m2, gamma) / Isentropic.densityRatio(before.mach(), gamma);
-    double pRatio = Isentropic.pressureRatio(m2, gamma) / Isentropic.pressureRatio(before.mach(), gamma);
-    State after = new State(m2, afterDir, before.density() * rhoRatio, before.pressure() * pRatio);
-    ExpectedWave head = wave(WaveKind.EXPANSION_HEAD, side, mu1, before.directionRad(),
-        ImageAngles.wrap(before.directionRad() + sign * mu1), at, feature, where + " expansion head");
-    ExpectedWave tail = wave(WaveKind.EXPANSION_TAIL, side, mu2, afterDir,
-        ImageAngles.wrap(afterDir + sign * mu2), at, feature, where + " expansion tail");
+    ExpectedWave head = wave(WaveKind.EXPANSION_HEAD, side, t.headAngleRad(), before.directionRad(),
+        ImageAngles.wrap(before.directionRad() + sign * t.headAngleRad()), at, feature, where + " expansion head");
+    ExpectedWave tail = wave(WaveKind.EXPANSION_TAIL, side, t.tailAngleRad(), afterDir,
+        ImageAngles.wrap(afterDir + sign * t.tailAngleRad()), at, feature, where + " expansion tail");
     return new Turned(new Fan(head, tail, before, after, sign), after);
   }
 
@@ -174,6 +169,16 @@ final class PatternBuilder {
   /** The first wave of an element (the shock, or a fan's head). */
   static ExpectedWave lead(Element e) {
     return e.waves().get(0);
+  }
+
+  /** A slip line's side as a pattern state, its direction measured from the freestream on side {@code sign}. */
+  State state(dev.wavemark.core.gas.SlipLine.Side s, int sign) {
+    return new State(s.mach(), ImageAngles.wrap(flowDir + sign * s.directionRad()), s.densityRatio(), s.pressureRatio());
+  }
+
+  /** Image direction of a direction given counter-clockwise from the freestream, mirrored when sign &lt; 0. */
+  double dir(double fromFlowRad, int sign) {
+    return ImageAngles.wrap(flowDir + sign * fromFlowRad);
   }
 
   /** Adds the element if not null. */

@@ -53,7 +53,7 @@ final class PlanarBodies {
       addInteracting(b, lead.element(), shoulder.element());
       rear[sign > 0 ? 0 : 1] = shoulder.after();
     }
-    trailingEdge(b, te, rear[0], rear[1]);
+    TrailingEdge.solve(b, te, rear[0], rear[1], dev.wavemark.core.gas.Profile.diamond(h, d.chordPx()), d.incidenceRad());
   }
 
   static void flatPlate(PatternBuilder b, BodyShape.FlatPlate p) {
@@ -69,15 +69,7 @@ final class PlanarBodies {
       b.add(lead.element());
       rear[sign > 0 ? 0 : 1] = lead.after();
     }
-    trailingEdge(b, te, rear[0], rear[1]);
-  }
-
-  /**
-   * Trailing-edge waves: the upper and lower streams meet and leave along a common direction at
-   * a common pressure, with a slip line between them.
-   */
-  static void trailingEdge(PatternBuilder b, Point2 te, State upper, State lower) {
-    TrailingEdge.solve(b, te, upper, lower);
+    TrailingEdge.solve(b, te, rear[0], rear[1], dev.wavemark.core.gas.Profile.flatPlate(p.chordPx()), p.incidenceRad());
   }
 
   /** Adds a leading-edge wave and the shoulder fan behind it, each ended where it meets the other. */

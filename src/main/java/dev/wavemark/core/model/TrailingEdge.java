@@ -1,5 +1,7 @@
 package dev.wavemark.core.model;
 
+import dev.wavemark.core.gas.Profile;
+import dev.wavemark.core.gas.ShockExpansion;
 import dev.wavemark.core.geom.ImageAngles;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.PatternBuilder.Turned;
@@ -13,11 +15,16 @@ import dev.wavemark.core.model.WavePattern.State;
 final class TrailingEdge {
   private TrailingEdge() {}
 
-  static void solve(PatternBuilder b, Point2 te, State upper, State lower) {
-    // Shock-expansion theory's usual closure: the wake leaves along the freestream direction.
-    double out = b.flowDir;
-    b.notes.add("trailing-edge waves assume the wake leaves along the freestream direction "
-        + "(the usual shock-expansion closure); the pressure-matched direction differs by a fraction of a degree");
+  /**
+   * The trailing-edge waves of {@code profile} by {@link ShockExpansion}: each stream turns to the
+   * pressure-matched direction of the slip line.
+   */
+  static void solve(PatternBuilder b, Point2 te, State upper, State lower, Profile profile, double incidenceRad) {
+    ShockExpansion.Solution sol = ShockExpansion.solve(profile, b.free.mach(), incidenceRad, b.gamma);
+    if (!(sol.trailingEdge() instanceof ShockExpansion.Sharp sharp)) {
+      return;
+    }
+    double out = ImageAngles.wrap(b.flowDir + sharp.slipLine().directionRad());
     Turned up = b.turn(upper, te, +1, ImageAngles.wrap(out - upper.directionRad()), Feature.TRAILING_EDGE, "upper trailing-edge");
     Turned lo = b.turn(lower, te, -1, -ImageAngles.wrap(out - lower.directionRad()), Feature.TRAILING_EDGE, "lower trailing-edge");
     b.add(up.element());

@@ -70,7 +70,8 @@ final class WallFlows {
     Turned second = b.turn(first.after(), d.secondCornerPx(), sign, d.secondDeflectionRad(), Feature.SECOND_CORNER, "second ramp");
     b.solids.add(wallSolid(b, d.wall(), d.cornerPx(), List.of(d.secondCornerPx()),
         b.flowDir + sign * (d.deflectionRad() + d.secondDeflectionRad())));
-    Interactions.sameFamily(b, (Shock) first.element(), (Shock) second.element(), sign);
+    Interactions.sameFamily(b, (Shock) first.element(), (Shock) second.element(), sign, d.deflectionRad(),
+        d.secondDeflectionRad(), d.secondCornerPx());
   }
 
   static void shockGenerator(PatternBuilder b, BodyShape.ShockGenerator g) {
@@ -99,7 +100,7 @@ final class WallFlows {
     b.solids.add(wallSolid(b, g.wall(), onWall(g.wall(), hit), List.of(), b.flowDir));
     Turned fan = b.turn(inc.after(), shoulder, genSign, -theta, Feature.SHOULDER, "generator shoulder");
     b.notes.add("the generator's base wake is not modelled; the shoulder fan is ended where it meets the reflected shock");
-    Interactions.reflection(b, incident, hit, wallSign, fan.element());
+    Interactions.reflection(b, incident, hit, wallSign, fan.element(), g.wall(), theta);
   }
 
   /** The crossing of a wave's infinite line with the wall line, or a geometry error. */
@@ -127,7 +128,7 @@ final class WallFlows {
         ule.plus(u.times(far)).plus(ImageAngles.unit(b.flowDir + 0.5 * Math.PI).times(far))));
     b.solids.add(List.of(lle, lle.plus(ImageAngles.unit(b.flowDir + t.lowerDeflectionRad()).times(far)),
         lle.plus(u.times(far)).minus(ImageAngles.unit(b.flowDir + 0.5 * Math.PI).times(far))));
-    Interactions.opposite(b, (Shock) up.element(), (Shock) lo.element());
+    Interactions.opposite(b, (Shock) up.element(), (Shock) lo.element(), t.upperDeflectionRad(), t.lowerDeflectionRad());
   }
 
   /** Weak waves from small wall disturbances: Mach lines at the freestream Mach angle. */

@@ -73,7 +73,8 @@ public record Bench(
 
   /** A typical bench for {@code optics}: no window, no lens, moderate noise, 12 bits. */
   public static Bench defaults(Optics optics) {
-    return new Bench(optics, +1, 0.5, 1.5, 2.0e-3, 0.6, 0.10, 2.26e-4, 0.35, 1.25e-4, 0.9, 0.6, 0.4, 12,
+    return new Bench(optics, +1, 0.5, 1.5, 2.0e-3, 0.12, 0.10, 2.26e-4, 0.35, 1.25e-4, optics == Optics.SHADOWGRAPH ? 1.3 : 0.9,
+        0.6, 0.4, 12,
         20000, 6, 0.85, 0.12, 0.04, Optional.empty(), Optional.empty(), 6);
   }
 

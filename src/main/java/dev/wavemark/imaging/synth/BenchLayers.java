@@ -28,6 +28,13 @@ final class BenchLayers {
   final float @Nullable [] mapX;
   final float @Nullable [] mapY;
 
+  /**
+   * Weak density texture of the bench (window striae, the tunnel's residual turbulence) as a
+   * density-gradient field in the raster's units, added to every flow frame.
+   */
+  final float[] textureGx;
+  final float[] textureGy;
+
   private @Nullable List<List<Point2>> cachedSolids;
   private float @Nullable [] cachedSilhouette;
 
@@ -39,6 +46,11 @@ final class BenchLayers {
     illumination(bench, rnd);
     bench.window().ifPresent(this::window);
     dust(bench.dustSpecks(), rnd);
+    textureGx = new float[width * height];
+    textureGy = new float[width * height];
+    if (bench.falloff() > 0 || bench.tilt() != 0) {
+      texture(rnd, 4.0e-3);
+    }
     if (bench.lens().isPresent()) {
       mapX = new float[width * height];
       mapY = new float[width * height];
@@ -78,6 +90,35 @@ final class BenchLayers {
           v += mottle * Math.cos(kx[i] * x + ky[i] * y + ph[i]);
         }
         light[y * width + x] = (float) Math.max(0, v);
+      }
+    }
+  }
+
+  /**
+   * Band-limited random density (blobs of 10 to 40 px), amplitude {@code rms} in rho/rho_inf:
+   * coarse Gaussian noise, bilinearly enlarged and smoothed, then differentiated.
+   */
+  private void texture(SplittableRandom rnd, double rms) {
+    int step = 12;
+    int cw = width / step + 3;
+    int ch = height / step + 3;
+    float[] coarse = new float[cw * ch];
+    for (int i = 0; i < coarse.length; i++) {
+      coarse[i] = (float) (rms * rnd.nextGaussian());
+    }
+    boofcv.struct.image.GrayF32 fine = new boofcv.struct.image.GrayF32(width, height);
+    for (int y = 0; y < height; y++) {
+      for (int x = 0; x < width; x++) {
+        fine.data[y * width + x] = (float) OpticalTransfer.bilinear(coarse, cw, ch, x / (double) step + 1, y / (double) step + 1, 0f);
+      }
+    }
+    boofcv.struct.image.GrayF32 sm = new boofcv.struct.image.GrayF32(width, height);
+    boofcv.alg.filter.blur.GBlurImageOps.gaussian(fine, sm, step * 0.6, -1, null);
+    for (int y = 1; y < height - 1; y++) {
+      for (int x = 1; x < width - 1; x++) {
+        int i = y * width + x;
+        textureGx[i] = 0.5f * (sm.data[i + 1] - sm.data[i - 1]);
+        textureGy[i] = 0.5f * (sm.data[i + width] - sm.data[i - width]);
       }
     }
   }

@@ -98,6 +98,10 @@ public final class Renderer {
         }
       }
     }
+    for (int i = 0; i < raster.gx.length; i++) {
+      raster.gx[i] += layers.textureGx[i];
+      raster.gy[i] += layers.textureGy[i];
+    }
     float[] img = bench.optics() == Optics.SHADOWGRAPH ? OpticalTransfer.shadowgraph(bench, raster, width, height)
         : OpticalTransfer.schlieren(bench, raster);
     float[] sil = layers.silhouette(p.solids());

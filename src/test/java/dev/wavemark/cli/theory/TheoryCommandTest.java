@@ -139,4 +139,48 @@ class TheoryCommandTest {
     assertEquals(1, r.rc(), r.both());
     assertTrue(r.err().contains("0.9") && r.err().contains("greater than 1"), r.both());
   }
+
+  @Test
+  void coneShockAngleAndInverse() throws Exception {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "10", "--json");
+    assertEquals(0, r.rc(), r.both());
+    // Sims (NASA SP-3004) / NACA 1135 Chart 5 (from memory): 10 deg cone at M = 2, shock 31.2 deg.
+    double shock = r.json().get("shockDeg").asDouble();
+    assertEquals(31.2, shock, 0.05, r.both());
+    Run inv = run("theory", "cone", "--shock", Double.toString(shock), "--cone", "10", "--json");
+    assertEquals(0, inv.rc(), inv.both());
+    assertEquals(2.0, inv.json().get("mach").asDouble(), 1e-6, inv.both());
+  }
+
+  @Test
+  void coneFieldRaysAreCsvFromConeToShock() {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "20", "--rays", "8");
+    assertEquals(0, r.rc(), r.both());
+    List<String> lines = r.out().lines().toList();
+    assertEquals(10, lines.size(), r.both());
+    assertTrue(lines.get(0).startsWith("rayDeg,mach,pressureRatio,densityRatio"), r.both());
+    assertEquals(20.0, Double.parseDouble(lines.get(1).split(",")[0]), 1e-6, r.both());
+  }
+
+  @Test
+  void detachedConeIsOneLine() {
+    Run r = run("theory", "cone", "--mach", "2", "--cone", "45");
+    assertEquals(1, r.rc(), r.both());
+    assertEquals(1, r.err().lines().count(), r.both());
+    assertTrue(r.err().contains("45") && r.err().contains("shock-detached"), r.both());
+  }
+
+  @Test
+  void standoffIsLabelledAndRangeChecked() throws Exception {
+    Run r = run("theory", "standoff", "--mach", "3", "--nose", "sphere", "--json");
+    assertEquals(0, r.rc(), r.both());
+    // Billig (1967): delta/R = 0.143 exp(3.24 / M^2) for a sphere.
+    assertEquals(0.143 * Math.exp(3.24 / 9), r.json().get("standoffRatio").asDouble(), 1e-12, r.both());
+    assertTrue(r.json().get("basis").asText().contains("correlation"), r.both());
+    Run back = run("theory", "standoff", "--standoff-ratio", r.json().get("standoffRatio").asText(), "--json");
+    assertEquals(3.0, back.json().get("mach").asDouble(), 1e-9, back.both());
+    Run out = run("theory", "standoff", "--mach", "25");
+    assertEquals(1, out.rc(), out.both());
+    assertTrue(out.err().contains("25") && out.err().contains("[1.2, 20]"), out.both());
+  }
 }

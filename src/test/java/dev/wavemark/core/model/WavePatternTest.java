@@ -97,4 +97,64 @@ class WavePatternTest {
     assertEquals(a.angleToFlowRad(), b.angleToFlowRad(), 1e-12);
     assertEquals(a.directionRad() + roll, b.directionRad(), 1e-12);
   }
+
+  @Test
+  void strongGeneratorMakesAMachReflectionWithTheTriplePointSolution() {
+    BodyShape.Wall wall = new BodyShape.Wall(new Point2(0, 370), new Point2(640, 370), Side.LOWER);
+    BodyShape g = new BodyShape.ShockGenerator(Math.toRadians(14), new Point2(150, 140), wall);
+    WavePattern.Solved s = WavePattern.solve(g, 2.0, G, 0, 640, 480);
+    assertEquals("mach", s.reflection());
+    dev.wavemark.core.gas.TriplePoint tp = dev.wavemark.core.gas.ShockReflection.machReflection(2.0, Math.toRadians(14), G);
+    ExpectedWave stem = find(s.expectedWaves(), "Mach stem");
+    assertEquals(tp.stemAngleToFlowRad(), stem.angleToFlowRad(), 1e-12);
+    assertEquals(370, stem.endPx().y(), 1e-6, "the stem stands on the wall");
+    assertEquals(tp.reflectedAngleToFlowRad(), find(s.expectedWaves(), "reflected shock").angleToFlowRad(), 1e-12);
+    assertTrue(s.notes().stream().anyMatch(n -> n.contains("approximate")));
+  }
+
+  @Test
+  void crossingShocksGoOnAsTransmittedShocks() {
+    BodyShape t = new BodyShape.TwinGenerators(new Point2(150, 135), new Point2(150, 345), Math.toRadians(8), Math.toRadians(6));
+    List<ExpectedWave> ws = WavePattern.of(t, 2.5, G, 0, 640, 480);
+    dev.wavemark.core.gas.ShockIntersection.Opposite o =
+        dev.wavemark.core.gas.ShockIntersection.opposite(2.5, Math.toRadians(8), Math.toRadians(6), G);
+    assertEquals(o.upperTransmitted().headAngleRad(), find(ws, "upper transmitted shock").angleToFlowRad(), 1e-12);
+    assertEquals(o.lowerTransmittedDirectionRad(), find(ws, "lower transmitted shock").directionRad(), 1e-12);
+    assertEquals(WaveKind.SLIP_LINE, find(ws, "slip line").kind());
+  }
+
+  @Test
+  void doubleRampShocksMergeWithTheSameFamilySolution() {
+    BodyShape.Wall wall = new BodyShape.Wall(new Point2(0, 330), new Point2(640, 330), Side.LOWER);
+    Point2 c2 = new Point2(170 + 110 * Math.cos(Math.toRadians(8)), 330 - 110 * Math.sin(Math.toRadians(8)));
+    BodyShape d = new BodyShape.DoubleRamp(Math.toRadians(8), new Point2(170, 330), Math.toRadians(8), c2, wall);
+    List<ExpectedWave> ws = WavePattern.of(d, 3.0, G, 0, 640, 480);
+    dev.wavemark.core.gas.ShockIntersection.SameFamily sf =
+        dev.wavemark.core.gas.ShockIntersection.sameFamily(3.0, Math.toRadians(8), Math.toRadians(8), G);
+    assertEquals(sf.mergedDirectionRad(), find(ws, "merged shock").directionRad(), 1e-12);
+    assertEquals(find(ws, "first ramp shock").endPx().x(), find(ws, "merged shock").startPx().x(), 1e-9);
+  }
+
+  @Test
+  void coneShockIsTheTaylorMaccollShock() {
+    BodyShape c = new BodyShape.Cone(Math.toRadians(15), 0, new Point2(150, 240), 150);
+    List<ExpectedWave> ws = WavePattern.of(c, 2.5, G, 0, 640, 480);
+    double beta = dev.wavemark.core.gas.ConicalFlow.of(G).shockAngle(2.5, Math.toRadians(15));
+    assertTrue(beta > Math.toRadians(15) && beta < ObliqueShock.beta(2.5, Math.toRadians(15), ShockBranch.WEAK, G),
+        "a cone's shock lies between its surface and the shock of a wedge of the same angle (fact of the trade)");
+    assertEquals(beta, find(ws, "upper conical shock").angleToFlowRad(), 1e-12);
+    assertEquals(-beta, find(ws, "lower conical shock").directionRad(), 1e-12);
+  }
+
+  @Test
+  void diamondTrailingEdgeWavesMatchShockExpansionTheory() {
+    double h = Math.toRadians(7);
+    double a = Math.toRadians(4);
+    BodyShape d = new BodyShape.Diamond(h, a, new Point2(150, 240), 230);
+    List<ExpectedWave> ws = WavePattern.of(d, 2.5, G, 0, 640, 480);
+    dev.wavemark.core.gas.ShockExpansion.Sharp te = (dev.wavemark.core.gas.ShockExpansion.Sharp)
+        dev.wavemark.core.gas.ShockExpansion.solve(dev.wavemark.core.gas.Profile.diamond(h, 230), 2.5, a, G).trailingEdge();
+    assertEquals(te.slipLine().directionRad(), find(ws, "trailing-edge slip line").directionRad(), 1e-9);
+    assertEquals(te.upperWave().turn().headAngleRad(), find(ws, "upper trailing-edge shock").angleToFlowRad(), 1e-7);
+  }
 }

@@ -1,0 +1,84 @@
+package dev.wavemark.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import dev.wavemark.files.Json;
+import dev.wavemark.files.ResultFile;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The analyze command in-process: the main job on a rendered picture, and its failure paths. */
+class AnalyzeCommandTest {
+  @TempDir Path dir;
+
+  private record Run(int rc, String out, String err) {
+    String both() {
+      return "rc=" + rc + "\nstdout:\n" + out + "\nstderr:\n" + err;
+    }
+  }
+
+  private static Run run(String... args) {
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    int rc = Main.commandLine(new PrintWriter(out, true), new PrintWriter(err, true)).execute(args);
+    return new Run(rc, out.toString(), err.toString());
+  }
+
+  /**
+   * The bundled 10 deg wedge picture, rendered at the Mach number in its truth file: the issue's
+   * acceptance tolerance for wedges at M 1.5-2.5 is 0.005.
+   */
+  @Test
+  void analysesTheRenderedWedgePictureToItsTrueMach() throws Exception {
+    Path samples = Path.of("sample-images");
+    JsonNode truth = Json.MAPPER.readTree(samples.resolve("run-2731-wedge-m20.truth.json").toFile());
+    Run r = run("analyze", samples.resolve("run-2731-wedge-m20.run.json").toString(), "--out", dir.toString(), "--no-progress");
+    assertEquals(0, r.rc(), r.both());
+    ResultFile res = ResultFile.read(dir.resolve("result.json"));
+    double trueMach = truth.get("mach").asDouble();
+    assertEquals(trueMach, res.summary().mach().value(), 0.005, r.both());
+    assertEquals(0, res.summary().failedFrames());
+    assertTrue(Files.exists(dir.resolve("report.html")) && Files.exists(dir.resolve("result.csv")));
+    assertTrue(r.out().contains("M = "), r.both());
+  }
+
+  @Test
+  void aMissingCalibrationFileIsOneLine() throws Exception {
+    Files.writeString(dir.resolve("x.run.json"), "{\"images\":{\"frames\":[\"a.png\"]},\"calibration\":\"nope/bench.json\","
+        + "\"model\":{\"shape\":\"wedge\",\"deflectionDeg\":10,\"leadingEdgePx\":[10,10],\"chordPx\":20}}");
+    Run r = run("analyze", dir.resolve("x.run.json").toString(), "--out", dir.resolve("out").toString());
+    assertEquals(1, r.rc(), r.both());
+    assertTrue(r.err().contains("[file-missing]") && r.err().contains("bench.json"), r.both());
+    assertEquals(1, r.err().strip().lines().count(), r.both());
+    assertFalse(Files.exists(dir.resolve("out/report.html")));
+  }
+
+  @Test
+  void anUnknownShapeIsOneLine() throws Exception {
+    Files.writeString(dir.resolve("y.run.json"), "{\"images\":{\"frames\":[\"a.png\"]},\"model\":{\"shape\":\"ogive\"}}");
+    Run r = run("analyze", dir.resolve("y.run.json").toString(), "--out", dir.resolve("out").toString());
+    assertEquals(1, r.rc(), r.both());
+    assertTrue(r.err().contains("[shape-unknown]") && r.err().contains("ogive"), r.both());
+    assertEquals(1, r.err().strip().lines().count(), r.both());
+  }
+
+  @Test
+  void aMissingOutOptionIsAUsageError() {
+    Run r = run("analyze", "whatever.run.json");
+    assertEquals(2, r.rc(), r.both());
+  }
+
+  @Test
+  void demoWithoutSamplesIsOneLine() {
+    Run r = run("demo", "--samples", dir.resolve("none").toString(), "--out", dir.resolve("demo").toString());
+    assertEquals(1, r.rc(), r.both());
+    assertTrue(r.err().contains("[samples-missing]"), r.both());
+  }
+}
