@@ -80,9 +80,6 @@ public final class WaveDetector {
       found.addAll(run(ctx, s));
     }
     found.addAll(Secondary.searches(req.shape(), found, ctx).stream().flatMap(s -> run(ctx, s).stream()).toList());
-    if (req.shape() instanceof BodyShape.Freestream) {
-      found.addAll(MachWaves.find(ctx));
-    }
     List<ObservedWave> out = new ArrayList<>();
     for (Found f : found) {
       out.add(f.toObserved(req.hints()));

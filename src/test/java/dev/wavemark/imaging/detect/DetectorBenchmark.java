@@ -1,0 +1,211 @@
+package dev.wavemark.imaging.detect;
+
+import boofcv.concurrency.BoofConcurrency;
+import dev.wavemark.core.geom.ImageAngles;
+import dev.wavemark.core.geom.Point2;
+import dev.wavemark.core.model.BodyShape;
+import dev.wavemark.core.model.ExpectedWave;
+import dev.wavemark.core.model.ObservedWave;
+import dev.wavemark.core.model.Optics;
+import dev.wavemark.core.model.Side;
+import dev.wavemark.core.model.WaveKind;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Accuracy and speed harness on pictures from the project renderer with known truth (not a timed
+ * test; run with {@code mvn test -Dtest=DetectorBenchmark -DexcludedGroups=none}). Prints the
+ * tables for the README.
+ */
+@Tag("slow")
+class DetectorBenchmark {
+
+  static List<BodyShape> shapes() {
+    BodyShape.Wall lowWall = new BodyShape.Wall(new Point2(0, 640), new Point2(1024, 640), Side.LOWER);
+    double d8 = Math.toRadians(8);
+    return List.of(
+        new BodyShape.Wedge(Math.toRadians(10), 0, new Point2(200.4, 384.3), 300),
+        new BodyShape.Diamond(Math.toRadians(6), Math.toRadians(2), new Point2(250.2, 384.6), 400),
+        new BodyShape.FlatPlate(Math.toRadians(5), new Point2(250.7, 384.1), 400),
+        new BodyShape.Cone(Math.toRadians(12), 0, new Point2(200.3, 384.2), 350),
+        new BodyShape.Ramp(Math.toRadians(12), new Point2(400.3, 640), lowWall),
+        new BodyShape.ExpansionCorner(Math.toRadians(10), new Point2(400.6, 640), lowWall),
+        new BodyShape.DoubleRamp(d8, new Point2(300.2, 640), d8, new Point2(420.2, 640 - 120 * Math.tan(d8)), lowWall),
+        new BodyShape.ShockGenerator(d8, new Point2(100.5, 150.2), lowWall),
+        new BodyShape.TwinGenerators(new Point2(100.5, 150.2), new Point2(100.5, 620.7), d8, d8));
+  }
+
+  record Row(String kind, double errDeg, double sigmaDeg) {}
+
+  @Test
+  void accuracy() {
+    BoofConcurrency.setMaxThreads(1);
+    Optics[] optics = {Optics.SCHLIEREN_VERTICAL_EDGE, Optics.SCHLIEREN_HORIZONTAL_EDGE, Optics.SHADOWGRAPH};
+    double[] snrs = {Double.POSITIVE_INFINITY, 20, 10, 5};
+    List<BodyShape> shapes = shapes();
+    List<Row> rows = new ArrayList<>();
+    Map<String, int[]> miss = new TreeMap<>();
+    int cases = 0;
+    int failed = 0;
+    int falseShocksHighSnr = 0;
+    int missedShocksHighSnr = 0;
+    for (int i = 0; i < 63; i++) {
+      BodyShape shape = shapes.get(i % shapes.size());
+      Optics o = optics[(i / shapes.size()) % 3];
+      int edge = (i / 27) % 2 == 0 ? 1 : -1;
+      double blur = 0.8 + 1.7 * ((i * 7) % 10) / 9.0;
+      double snr = snrs[(i * 3 + i / 9) % 4];
+      double roll = Math.toRadians(5.0 * ((i * 5) % 11) / 10.0) * (i % 2 == 0 ? 1 : -1);
+      double mach = 2.0 + 0.5 * ((i * 3) % 7) / 6.0;
+      RenderedCase c;
+      try {
+        c = RenderedCase.of(shape.contractName(), shape, mach, o, edge, blur, snr, roll, 1024, 768, 100 + i);
+      } catch (RuntimeException e) {
+        System.out.println("render failed " + shape.contractName() + ": " + e.getMessage());
+        continue;
+      }
+      cases++;
+      List<ObservedWave> found;
+      try {
+        found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), o, shape, roll));
+      } catch (RuntimeException e) {
+        System.out.println("detect failed " + shape.contractName() + " " + o + ": " + e.getMessage());
+        failed++;
+        found = List.of();
+      }
+      boolean[] used = new boolean[found.size()];
+      for (ExpectedWave t : c.truth()) {
+        String k = family(t.kind());
+        if (k == null) {
+          continue;
+        }
+        int best = -1;
+        double bestErr = Math.toRadians(1.5);
+        for (int j = 0; j < found.size(); j++) {
+          ObservedWave w = found.get(j);
+          if (used[j] || !k.equals(family(w.kind()))) {
+            continue;
+          }
+          double err = Math.abs(lineDiff(w.line().directionRad(), t.directionRad()));
+          double startGap = w.line().startPx().distanceTo(t.startPx());
+          if (err < bestErr && startGap < 120) {
+            bestErr = err;
+            best = j;
+          }
+        }
+        int[] m = miss.computeIfAbsent(k, x -> new int[3]);
+        m[0]++;
+        if (best < 0) {
+          m[1]++;
+          if (k.equals("shock") && snr >= 10) {
+            missedShocksHighSnr++;
+            System.out.println("missed " + t.label() + " in " + shape.contractName() + " " + o + " snr " + snr);
+          }
+          continue;
+        }
+        used[best] = true;
+        ObservedWave w = found.get(best);
+        rows.add(new Row(k, Math.toDegrees(lineDiff(w.line().directionRad(), t.directionRad())),
+            Math.toDegrees(w.line().directionUncertaintyRad())));
+      }
+      for (int j = 0; j < found.size(); j++) {
+        if (!used[j]) {
+          String k = family(found.get(j).kind());
+          miss.computeIfAbsent(k, x -> new int[3])[2]++;
+          if ("shock".equals(k) && snr >= 10) {
+            falseShocksHighSnr++;
+            System.out.println("false " + found.get(j).kind() + " in " + shape.contractName() + " " + o + " snr " + snr);
+          }
+        }
+      }
+    }
+    System.out.println("pictures " + cases + ", detection failures " + failed);
+    System.out.println("| family | truth waves | matched | median err (deg) | p90 err (deg) | missed | false | within 1 sigma |");
+    for (var e : miss.entrySet()) {
+      List<Double> errs = new ArrayList<>();
+      int within = 0;
+      for (Row r : rows) {
+        if (r.kind().equals(e.getKey())) {
+          errs.add(Math.abs(r.errDeg()));
+          within += Math.abs(r.errDeg()) <= r.sigmaDeg() ? 1 : 0;
+        }
+      }
+      errs.sort(null);
+      int n = errs.size();
+      System.out.printf("| %s | %d | %d | %.4f | %.4f | %d | %d | %.0f%% |%n", e.getKey(), e.getValue()[0], n,
+          n == 0 ? Double.NaN : errs.get(n / 2), n == 0 ? Double.NaN : errs.get((int) Math.min(n - 1, Math.floor(0.9 * n))),
+          e.getValue()[1], e.getValue()[2], n == 0 ? 0 : 100.0 * within / n);
+    }
+    System.out.println("missed shocks at SNR >= 10: " + missedShocksHighSnr + ", false shocks at SNR >= 10: " + falseShocksHighSnr);
+  }
+
+  @Test
+  void speed() throws Exception {
+    BoofConcurrency.setMaxThreads(1);
+    BodyShape shape = shapes().get(0);
+    for (int[] size : new int[][] {{1024, 768}, {2048, 1536}}) {
+      double f = size[0] / 1024.0;
+      BodyShape s = new BodyShape.Wedge(Math.toRadians(10), 0, new Point2(200.4 * f, 384.3 * f), 300 * f);
+      RenderedCase c = RenderedCase.of("wedge", s, 2.0, Optics.SCHLIEREN_VERTICAL_EDGE, 1, 1.2, 20, 0, size[0], size[1], 9);
+      DetectionRequest req = DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), c.optics(), s, 0);
+      WaveDetector d = WaveDetector.create();
+      for (int i = 0; i < 15; i++) {
+        d.detect(req);
+      }
+      double[] t = new double[40];
+      for (int i = 0; i < t.length; i++) {
+        long t0 = System.nanoTime();
+        d.detect(req);
+        t[i] = (System.nanoTime() - t0) / 1e6;
+      }
+      java.util.Arrays.sort(t);
+      System.out.printf("speed %dx%d: median %.1f ms (min %.1f, max %.1f), %d waves%n", size[0], size[1], t[t.length / 2], t[0],
+          t[t.length - 1], d.detect(req).size());
+      if (size[0] == 1024) {
+        int frames = 60;
+        long t1 = System.nanoTime();
+        for (int i = 0; i < frames; i++) {
+          d.detect(req);
+        }
+        double one = frames / ((System.nanoTime() - t1) / 1e9);
+        var pool = java.util.concurrent.Executors.newFixedThreadPool(2);
+        long t2 = System.nanoTime();
+        List<java.util.concurrent.Future<?>> fs = new ArrayList<>();
+        for (int i = 0; i < frames; i++) {
+          fs.add(pool.submit(() -> d.detect(req)));
+        }
+        for (var fu : fs) {
+          fu.get();
+        }
+        double two = frames / ((System.nanoTime() - t2) / 1e9);
+        pool.shutdown();
+        System.out.printf("sequence: 1 thread %.1f frames/s, 2 threads %.1f frames/s, ratio %.2f%n", one, two, two / one);
+      }
+    }
+  }
+
+  static String family(WaveKind k) {
+    return switch (k) {
+      case OBLIQUE_SHOCK, CONICAL_SHOCK, REFLECTED_SHOCK, TRANSMITTED_SHOCK, MACH_STEM, BOW_SHOCK -> "shock";
+      case EXPANSION_HEAD -> "fan-head";
+      case EXPANSION_TAIL -> "fan-tail";
+      case MACH_WAVE -> "mach-wave";
+      case SLIP_LINE -> null;
+    };
+  }
+
+  /** Difference of two undirected line directions, wrapped into (-pi/2, pi/2]. */
+  static double lineDiff(double a, double b) {
+    double d = ImageAngles.wrap(a - b);
+    if (d > 0.5 * Math.PI) {
+      d -= Math.PI;
+    } else if (d <= -0.5 * Math.PI) {
+      d += Math.PI;
+    }
+    return d;
+  }
+}
