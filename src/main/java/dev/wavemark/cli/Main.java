@@ -38,6 +38,7 @@ public final class Main implements Runnable {
     cl.setOut(out);
     cl.setErr(err);
     cl.setExecutionExceptionHandler(Main::oneLine);
+    cl.setParameterExceptionHandler(Main::badArguments);
     return cl;
   }
 
@@ -48,6 +49,19 @@ public final class Main implements Runnable {
     out.flush();
     err.flush();
     System.exit(rc);
+  }
+
+  /**
+   * Bad arguments: one line naming the value, a pointer to the command's help, exit 2 (the
+   * picocli convention), instead of the whole usage text.
+   */
+  private static int badArguments(CommandLine.ParameterException e, String[] args) {
+    CommandLine cl = e.getCommandLine();
+    PrintWriter err = cl.getErr();
+    String name = cl.getCommandSpec().qualifiedName();
+    err.println(name + ": " + e.getMessage().replace('\n', ' ') + " (see '" + name + " --help')");
+    err.flush();
+    return cl.getCommandSpec().exitCodeOnInvalidInput();
   }
 
   /** Domain failures become one line on stderr and exit 1; nothing else prints a stack trace. */
