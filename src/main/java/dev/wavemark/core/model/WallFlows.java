@@ -92,8 +92,8 @@ final class WallFlows {
     // that its shoulder fan reaches the wall behind the impingement point.
     double mu2 = MachAngle.of(inc.after().mach());
     double slope = Math.tan(theta + mu2);
-    double need = (1.15 * reach - depth / slope) / (Math.cos(theta) - Math.sin(theta) / slope);
-    double len = Math.max(0.3 * reach, Math.min(0.8 * reach, need));
+    double need = (1.6 * reach - depth / slope) / (Math.cos(theta) - Math.sin(theta) / slope);
+    double len = Math.max(0.3 * reach, Math.min(0.95 * reach, need));
     Point2 shoulder = le.plus(ImageAngles.unit(b.flowDir + genSign * theta).times(len));
     Point2 base = le.plus(ImageAngles.unit(b.flowDir).times(len * Math.cos(theta)));
     b.solids.add(List.of(le, shoulder, base));
