@@ -98,16 +98,20 @@ final class AngularScan {
   record Hit(double index, double strength, int sign, double widthIndex) {}
 
   /**
-   * The strongest thin line: the largest |mean| (schlieren: a peak), refined as the midpoint of
-   * its half-height crossings. Returns null if nothing exceeds {@code minSnr} noise deviations.
+   * The strongest thin line: the largest |value| of the profile with its running median taken
+   * off (schlieren: a peak; the median leaves the broad plateau of a conical compression or of
+   * a fan beside it out, so that a shock on top of such a plateau still reads as a thin line),
+   * refined as the midpoint of its half-height crossings. Returns null if nothing exceeds
+   * {@code minSnr} noise deviations.
    */
   Hit strongestLine(double minSnr, double maxWidthIndex) {
     double sigma = noise();
+    double[] q = withoutMedian((int) Math.ceil(PLATEAU_WIDTHS * maxWidthIndex));
     int best = -1;
     double bv = 0;
-    for (int i = 1; i < mean.length - 1; i++) {
-      double v = Math.abs(at(i));
-      if (v > bv && isNarrow(i, maxWidthIndex)) {
+    for (int i = 1; i < q.length - 1; i++) {
+      double v = Math.abs(q[i]);
+      if (v > bv && isNarrow(q, i, maxWidthIndex)) {
         bv = v;
         best = i;
       }
@@ -115,10 +119,9 @@ final class AngularScan {
     if (best < 0 || bv < minSnr * sigma) {
       return null;
     }
-    int sign = at(best) >= 0 ? 1 : -1;
-    double[] q = new double[mean.length];
+    int sign = q[best] >= 0 ? 1 : -1;
     for (int i = 0; i < q.length; i++) {
-      q[i] = sign * at(i);
+      q[i] *= sign;
     }
     Profiles.Located l = Profiles.peak(q, 1, best, best);
     double centre = l == null ? best : l.centre();
@@ -126,22 +129,44 @@ final class AngularScan {
     return new Hit(centre, bv / sigma, sign, width);
   }
 
-  private boolean isNarrow(int i, double maxWidthIndex) {
-    double v = Math.abs(at(i));
+  /** Running-median half-width, in multiples of the widest line accepted. */
+  static final double PLATEAU_WIDTHS = 3;
+
+  /** The profile minus its running median over 2w+1 angles (missing angles count as zero). */
+  double[] withoutMedian(int w) {
+    int n = mean.length;
+    double[] q = new double[n];
+    double[] win = new double[2 * w + 1];
+    for (int i = 0; i < n; i++) {
+      int lo = Math.max(0, i - w);
+      int hi = Math.min(n - 1, i + w);
+      int m = 0;
+      for (int k = lo; k <= hi; k++) {
+        win[m++] = at(k);
+      }
+      java.util.Arrays.sort(win, 0, m);
+      q[i] = at(i) - win[m / 2];
+    }
+    return q;
+  }
+
+  private static boolean isNarrow(double[] q, int i, double maxWidthIndex) {
+    double v = Math.abs(q[i]);
     if (v == 0) {
       return false;
     }
     int w = (int) Math.ceil(maxWidthIndex);
     int lo = i;
-    while (lo > 0 && Math.abs(at(lo)) >= 0.5 * v && i - lo <= w) {
+    while (lo > 0 && Math.abs(q[lo]) >= 0.5 * v && i - lo <= w) {
       lo--;
     }
     int hi = i;
-    while (hi < mean.length - 1 && Math.abs(at(hi)) >= 0.5 * v && hi - i <= w) {
+    while (hi < q.length - 1 && Math.abs(q[hi]) >= 0.5 * v && hi - i <= w) {
       hi++;
     }
-    return hi - lo <= 2 * w && Math.abs(at(i)) >= Math.abs(at(i - 1)) && Math.abs(at(i)) >= Math.abs(at(i + 1));
+    return hi - lo <= 2 * w && v >= Math.abs(q[i - 1]) && v >= Math.abs(q[i + 1]);
   }
+
 
   /**
    * The strongest dark-bright pair (shadowgraph shock): the largest lobe-to-lobe difference
@@ -242,9 +267,13 @@ final class AngularScan {
     double sigma = noise();
     Hit pos = null;
     Hit neg = null;
+    double[] q = new double[mean.length];
+    for (int k = 0; k < q.length; k++) {
+      q[k] = at(k);
+    }
     for (int i = 1; i < mean.length - 1; i++) {
-      double v = at(i);
-      if (Math.abs(v) < minSnr * sigma || !isNarrow(i, maxWidthIndex)) {
+      double v = q[i];
+      if (Math.abs(v) < minSnr * sigma || !isNarrow(q, i, maxWidthIndex)) {
         continue;
       }
       Hit h = new Hit(i, Math.abs(v) / sigma, v > 0 ? 1 : -1, 1);
