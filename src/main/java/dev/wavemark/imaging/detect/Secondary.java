@@ -176,6 +176,9 @@ final class Secondary {
   static final double SHORT_SKIP_PX = 12;
   /** A short secondary shock must offer this much line in the flow, px. */
   static final double SHORT_MIN_LENGTH_PX = 20;
+  static final double WINDOW_FRACTION = 1.0;
+  static final double STEM_WINDOW_FRACTION = 0.6;
+
 
   /**
    * A shock from a known secondary origin that may be short (it ends where it meets a fan or the
@@ -232,7 +235,7 @@ final class Secondary {
       return Optional.empty();
     }
     Signature sig = ctx.shadow() ? Signature.DIPOLE : Signature.PEAK;
-    double window = 0.6 * (ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX);
+    double window = (stemLike ? STEM_WINDOW_FRACTION : WINDOW_FRACTION) * (ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX);
     int minSupport = (int) Math.max(stemLike ? 8 : 12, 0.2 * usable);
     Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
     if (m == null) {
