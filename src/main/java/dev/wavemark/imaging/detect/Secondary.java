@@ -21,7 +21,11 @@ final class Secondary {
 
   private static final double EPS = Math.toRadians(0.7);
   private static final double NEAR_NORMAL = Math.toRadians(87);
-  /** An incident shock ending this far before the wall ends at a triple point, px. */
+  /**
+   * An incident shock can end at a triple point only when its fitted segment stops at least this
+   * far before the wall, px (and its contrast does not go on towards the wall, see
+   * {@link #continuesTo}).
+   */
   static final double TRIPLE_POINT_GAP_PX = 25;
 
   /** The secondary waves of a frame, measured. */
@@ -172,19 +176,24 @@ final class Secondary {
     return best;
   }
 
-  /** The first profiles of a short secondary shock start this close to its origin, px. */
+  /** The first profiles of a short secondary shock start this far from its origin (clear of the incident shock), px. */
   static final double SHORT_SKIP_PX = 12;
   /** A short secondary shock must offer this much line in the flow, px. */
   static final double SHORT_MIN_LENGTH_PX = 20;
+  /**
+   * Profile half-length of a secondary shock, as a fraction of a primary one's: the full length,
+   * since a shorter one biases the centres towards the first candidate (0.28° on a rendered
+   * Mach reflection's reflected shock with 0.6).
+   */
   static final double WINDOW_FRACTION = 1.0;
+  /** The same for a Mach stem, whose short profiles must stay clear of the masked wall. */
   static final double STEM_WINDOW_FRACTION = 0.6;
-
 
   /**
    * A shock from a known secondary origin that may be short (it ends where it meets a fan or the
    * window): the strongest line of the pencil, allowed the broad angular peak of a short line,
-   * measured from close to the origin with a narrower profile (the wall and the incident shock
-   * are near).
+   * measured with at least {@link #SHORT_MIN_LENGTH_PX} of line and ended where its peak fades
+   * ({@link #lineEnd}).
    */
   static Optional<WaveDetector.Found> shortShock(WaveDetector.Context ctx, Search s) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
@@ -226,7 +235,10 @@ final class Secondary {
   /** A Mach stem leans at most this far from the wall normal. */
   static final double STEM_MAX_LEAN_RAD = Math.toRadians(25);
 
-  /** The accurate stage for a short line: a narrower profile, fewer points, two passes. */
+  /**
+   * The accurate stage for a short line: fewer points than a primary wave needs, the segment
+   * ended where the line fades, a third pass for a stem's narrow profiles.
+   */
   private static Optional<WaveDetector.Found> measureShort(WaveDetector.Context ctx, Measure.Candidate c, WaveKind kind, Side side,
       Feature feature, Point2 origin) {
     double usable = c.s1() - c.s0();
@@ -235,7 +247,8 @@ final class Secondary {
       return Optional.empty();
     }
     Signature sig = ctx.shadow() ? Signature.DIPOLE : Signature.PEAK;
-    double window = (stemLike ? STEM_WINDOW_FRACTION : WINDOW_FRACTION) * (ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX);
+    double full = ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX;
+    double window = (stemLike ? STEM_WINDOW_FRACTION : WINDOW_FRACTION) * full;
     int minSupport = (int) Math.max(stemLike ? 8 : 12, 0.2 * usable);
     Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
     if (m == null) {
@@ -252,6 +265,13 @@ final class Secondary {
         return Optional.empty();
       }
       c2 = new Measure.Candidate(c2.ox(), c2.oy(), c2.ux(), c2.uy(), c2.s0(), end);
+    }
+    if (stemLike) {
+      // the narrow profile pulls the centres towards the candidate: one more pass from the fit
+      Measure.Result mid = Measure.measure(ctx.full(), c2, sig, window, m.sign(), ctx.noise(), null, minSupport);
+      if (mid != null) {
+        c2 = c2.recentred(mid.distortedFit());
+      }
     }
     Measure.Result m2 = Measure.measure(ctx.full(), c2, sig, window, m.sign(), ctx.noise(), ctx.undistort(), minSupport);
     return m2 == null ? Optional.empty() : Optional.of(new WaveDetector.Found(kind, side, feature, m2, origin));

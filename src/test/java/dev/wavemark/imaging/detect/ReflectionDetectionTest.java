@@ -78,7 +78,7 @@ class ReflectionDetectionTest {
       double err = errDeg(r, truth(c, WaveKind.REFLECTED_SHOCK));
       System.out.printf("mach snr %s: stem error %.3f deg, reflected error %.3f deg (sigma %.3f)%n", snr, stemErr, err,
           Math.toDegrees(r.line().directionUncertaintyRad()));
-      assertTrue(stemErr < 2, "Mach stem off by " + stemErr + " deg at SNR " + snr);
+      assertTrue(stemErr < 0.6, "Mach stem off by " + stemErr + " deg at SNR " + snr);
       assertTrue(err < 0.3, "reflected shock off by " + err + " deg at SNR " + snr);
     }
   }
