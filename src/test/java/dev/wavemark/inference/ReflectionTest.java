@@ -85,6 +85,65 @@ class ReflectionTest {
     assertEquals(ReflectionVerdict.Kind.REGULAR, unseen.predicted());
   }
 
+  /**
+   * At M = 2 (gamma = 1.4) a wall reflection is regular up to an incident deflection of about
+   * 12.9° (from memory; the oblique-shock relations of NACA Report 1135 solved independently of
+   * this code, with a reflected shock that just reaches the maximum deflection behind the
+   * incident one, give 12.90°), and there is no von Neumann criterion below it (Ben-Dor, as
+   * above: no dual-solution domain below M of about 2.2; from memory).
+   */
+  private static final double DETACHMENT_M2_DEG = 12.90;
+
+  @Test
+  void regularAtMachTwoBelowTheDetachmentCriterion() {
+    // 8° at M = 2, the conditions of the regular-reflection sample: below 12.9°
+    ReflectionVerdict v = ReflectionJudge.judge(generator(8), Optional.of(2.0), "inferred", 1.4,
+        EnumSet.of(WaveKind.OBLIQUE_SHOCK, WaveKind.REFLECTED_SHOCK));
+    assertEquals(DETACHMENT_M2_DEG, Math.toDegrees(v.limits().orElseThrow().detachmentDeflectionRad()), CRITERIA_TOL_DEG);
+    assertEquals(ReflectionVerdict.Kind.REGULAR, v.predicted());
+    assertEquals(ReflectionVerdict.Kind.REGULAR, v.observed());
+    assertEquals(ReflectionVerdict.Kind.REGULAR, v.verdict());
+  }
+
+  @Test
+  void machAtMachTwoBeyondTheDetachmentCriterion() {
+    // 14° at M = 2, the conditions of the Mach-reflection sample: beyond 12.9°
+    ReflectionVerdict v = ReflectionJudge.judge(generator(14), Optional.of(2.0), "inferred", 1.4,
+        EnumSet.of(WaveKind.OBLIQUE_SHOCK, WaveKind.MACH_STEM, WaveKind.REFLECTED_SHOCK));
+    assertEquals(DETACHMENT_M2_DEG, Math.toDegrees(v.limits().orElseThrow().detachmentDeflectionRad()), CRITERIA_TOL_DEG);
+    assertEquals(ReflectionVerdict.Kind.MACH, v.predicted());
+    assertEquals(ReflectionVerdict.Kind.MACH, v.observed());
+    assertEquals(ReflectionVerdict.Kind.MACH, v.verdict());
+  }
+
+  @Test
+  void dualSolutionDomainAtMachFiveBetweenThePublishedCriteria() {
+    // 21.5° and 27.0° lie inside 20.9°-27.75° at M = 5 (Ben-Dor, as above); 20.0° below, 28.5° beyond
+    assertEquals(ReflectionVerdict.Kind.DUAL_SOLUTION, predicted(21.5, 5.0));
+    assertEquals(ReflectionVerdict.Kind.DUAL_SOLUTION, predicted(27.0, 5.0));
+    assertEquals(ReflectionVerdict.Kind.REGULAR, predicted(20.0, 5.0));
+    assertEquals(ReflectionVerdict.Kind.MACH, predicted(28.5, 5.0));
+    // either reflection may be seen there; the verdict is what the picture shows
+    ReflectionVerdict seenMach = ReflectionJudge.judge(generator(24), Optional.of(5.0), "inferred", 1.4,
+        EnumSet.of(WaveKind.MACH_STEM, WaveKind.REFLECTED_SHOCK));
+    assertEquals(ReflectionVerdict.Kind.MACH, seenMach.verdict());
+  }
+
+  private static ReflectionVerdict.Kind predicted(double deflectionDeg, double mach) {
+    return ReflectionJudge.judge(generator(deflectionDeg), Optional.of(mach), "inferred", 1.4, EnumSet.noneOf(WaveKind.class)).predicted();
+  }
+
+  @Test
+  void noneWhenAMachReflectionIsPredictedButNothingIsInView() {
+    ReflectionVerdict v = ReflectionJudge.judge(generator(14), Optional.of(2.0), "inferred", 1.4, EnumSet.of(WaveKind.OBLIQUE_SHOCK));
+    assertEquals(ReflectionVerdict.Kind.MACH, v.predicted());
+    assertEquals(ReflectionVerdict.Kind.NONE, v.observed());
+    assertEquals(ReflectionVerdict.Kind.NONE, v.verdict());
+    ReflectionVerdict noMach = ReflectionJudge.judge(generator(14), Optional.empty(), "inferred", 1.4, EnumSet.of(WaveKind.MACH_STEM));
+    assertEquals(ReflectionVerdict.Kind.NONE, noMach.predicted());
+    assertEquals(ReflectionVerdict.Kind.MACH, noMach.verdict());
+  }
+
   @Test
   void endToEndRegularReflectionAndADisagreementWarning() {
     BodyShape shape = generator(8);

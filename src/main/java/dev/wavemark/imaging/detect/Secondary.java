@@ -8,6 +8,7 @@ import dev.wavemark.core.model.Side;
 import dev.wavemark.core.model.WaveKind;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Waves that start where other waves end: a reflected shock at the wall impingement point (or,
@@ -20,35 +21,62 @@ final class Secondary {
 
   private static final double EPS = Math.toRadians(0.7);
   private static final double NEAR_NORMAL = Math.toRadians(87);
-  /** An incident shock ending this far before the wall ends at a triple point, px. */
+  /**
+   * An incident shock can end at a triple point only when its fitted segment stops at least this
+   * far before the wall, px (and its contrast does not go on towards the wall, see
+   * {@link #continuesTo}).
+   */
   static final double TRIPLE_POINT_GAP_PX = 25;
+
+  /** The secondary waves of a frame, measured. */
+  static List<WaveDetector.Found> find(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
+    if (shape instanceof BodyShape.ShockGenerator g) {
+      return reflection(g, found, ctx);
+    }
+    List<WaveDetector.Found> out = new ArrayList<>();
+    for (Search s : searches(shape, found, ctx)) {
+      out.addAll(WaveDetector.run(ctx, s));
+    }
+    return out;
+  }
+
+  /**
+   * The waves where a generator's incident shock meets the wall: a reflected shock from the
+   * impingement point when the incident shock reaches the wall, else a Mach stem and a reflected
+   * shock from where it stops (the triple point).
+   */
+  static List<WaveDetector.Found> reflection(BodyShape.ShockGenerator g, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
+    List<WaveDetector.Found> out = new ArrayList<>();
+    WaveDetector.Found inc = first(found, Feature.LEADING_EDGE);
+    if (inc == null) {
+      return out;
+    }
+    double w = Search.wallDirection(g.wall(), ctx.flow());
+    Side away = g.wall().solidSide().opposite();
+    LineFit.Result f = inc.m().distortedFit();
+    Point2 hit = intersect(f, g.wall().a(), ImageAngles.unit(w));
+    if (hit == null || !ctx.full().inFlowOrNear(hit.x(), hit.y(), 20)) {
+      return out;
+    }
+    Point2 end = nearerEnd(f, hit);
+    if (end.distanceTo(hit) > TRIPLE_POINT_GAP_PX && !continuesTo(ctx, inc, end, hit)) {
+      Point2 tp = end;
+      stem(ctx, tp, w, g.wall().solidSide(), g.wall().a()).ifPresent(out::add);
+      Search r = Search.wallShock(tp, w, 0, away, WaveKind.REFLECTED_SHOCK, Feature.TRIPLE_POINT);
+      shortShock(ctx, r).ifPresent(out::add);
+    } else {
+      Search r = Search.shock(hit, w + away.sign() * EPS, w + away.sign() * NEAR_NORMAL, WaveKind.REFLECTED_SHOCK, away,
+          Feature.IMPINGEMENT);
+      shortShock(ctx, r).ifPresent(out::add);
+    }
+    return out;
+  }
 
   static List<Search> searches(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
     List<Search> out = new ArrayList<>();
-    // the other shapes make no waves from secondary points
-    if (shape instanceof BodyShape.ShockGenerator g) {
-        WaveDetector.Found inc = first(found, Feature.LEADING_EDGE);
-        if (inc == null) {
-          return out;
-        }
-        double w = Search.wallDirection(g.wall(), ctx.flow());
-        Side away = g.wall().solidSide().opposite();
-        Point2 hit = intersect(inc.m().distortedFit(), g.wall().a(), ImageAngles.unit(w));
-        if (hit == null || !ctx.full().inFlowOrNear(hit.x(), hit.y(), 20)) {
-          return out;
-        }
-        LineFit.Result f = inc.m().distortedFit();
-        Point2 end = new Point2(f.cx() + f.endAlong() * f.ux(), f.cy() + f.endAlong() * f.uy());
-        if (end.distanceTo(hit) > TRIPLE_POINT_GAP_PX) {
-          int g2 = g.wall().solidSide().sign();
-          double toWall = w + g2 * 0.5 * Math.PI;
-          out.add(Search.shock(end, toWall - Math.toRadians(25), toWall + Math.toRadians(25), WaveKind.MACH_STEM,
-              g.wall().solidSide(), Feature.TRIPLE_POINT));
-          out.add(Search.wallShock(end, w, 0, away, WaveKind.REFLECTED_SHOCK, Feature.TRIPLE_POINT));
-        } else {
-          out.add(Search.shock(hit, w + away.sign() * EPS, w + away.sign() * NEAR_NORMAL, WaveKind.REFLECTED_SHOCK, away,
-              Feature.IMPINGEMENT));
-        }
+    // the other shapes make no waves from secondary points; a generator's are found by reflection()
+    if (shape instanceof BodyShape.ShockGenerator) {
+      return out;
     } else if (shape instanceof BodyShape.TwinGenerators t) {
         Point2 x = crossing(found, Feature.LEADING_EDGE, Feature.LEADING_EDGE, ctx);
         if (x != null) {
@@ -64,6 +92,250 @@ final class Secondary {
         }
     }
     return out;
+  }
+
+  /** The end of a fitted segment nearer to {@code p}. */
+  private static Point2 nearerEnd(LineFit.Result f, Point2 p) {
+    Point2 a = new Point2(f.cx() + f.startAlong() * f.ux(), f.cy() + f.startAlong() * f.uy());
+    Point2 b = new Point2(f.cx() + f.endAlong() * f.ux(), f.cy() + f.endAlong() * f.uy());
+    return a.distanceTo(p) < b.distanceTo(p) ? a : b;
+  }
+
+  /**
+   * Whether the incident shock goes on past the end of its fitted segment towards the wall:
+   * its contrast on the extension beyond {@code end} against its contrast on the last stretch of
+   * the segment. The fitted segment usually stops short of the wall because the normal profiles
+   * run into the masked wall; the extension is then sampled with shorter profiles. When too
+   * little of the extension is in the flow to tell, the shock is taken to reach the wall.
+   */
+  static boolean continuesTo(WaveDetector.Context ctx, WaveDetector.Found inc, Point2 end, Point2 hit) {
+    double len = end.distanceTo(hit);
+    double ux = (hit.x() - end.x()) / len;
+    double uy = (hit.y() - end.y()) / len;
+    double before = contrast(ctx.full(), end, ux, uy, -CONTINUATION_REFERENCE_PX, -4);
+    double beyond = contrast(ctx.full(), end, ux, uy, CONTINUATION_SKIP_PX, len);
+    if (Double.isNaN(before) || Double.isNaN(beyond)) {
+      return true;
+    }
+    return beyond > CONTINUATION_RATIO * before;
+  }
+
+  /** Half-length of the short profiles used on an extension, px. */
+  private static final double CONTINUATION_HALF_PX = 4;
+  /** The extension is sampled from this far beyond the segment's end (clear of a Mach stem's foot), px. */
+  private static final double CONTINUATION_SKIP_PX = 6;
+  /** The reference stretch at the end of the fitted segment, px. */
+  private static final double CONTINUATION_REFERENCE_PX = 25;
+  /** An extension keeping this fraction of the segment's contrast carries the same shock. */
+  private static final double CONTINUATION_RATIO = 0.4;
+
+  /**
+   * The contrast of a line along {@code o + s u}, s in [s0, s1]: the mean of the short normal
+   * profiles that lie wholly in the flow, its largest departure within 2 px of the line from the
+   * median of its outer parts. NaN when fewer than 3 profiles are usable.
+   */
+  private static double contrast(Raster r, Point2 o, double ux, double uy, double s0, double s1) {
+    int m = (int) Math.round(2 * CONTINUATION_HALF_PX / Measure.SAMPLE_PX) + 1;
+    double[] mean = new double[m];
+    int used = 0;
+    for (double s = s0; s <= s1; s += 1) {
+      double[] p = new double[m];
+      boolean ok = true;
+      for (int j = 0; j < m && ok; j++) {
+        double off = j * Measure.SAMPLE_PX - CONTINUATION_HALF_PX;
+        p[j] = r.sample(o.x() + s * ux - off * uy, o.y() + s * uy + off * ux);
+        ok = !Double.isNaN(p[j]);
+      }
+      if (ok) {
+        for (int j = 0; j < m; j++) {
+          mean[j] += p[j];
+        }
+        used++;
+      }
+    }
+    if (used < 3) {
+      return Double.NaN;
+    }
+    double[] outer = new double[m];
+    int k = 0;
+    double best = 0;
+    for (int j = 0; j < m; j++) {
+      double off = Math.abs(j * Measure.SAMPLE_PX - CONTINUATION_HALF_PX);
+      if (off >= 3) {
+        outer[k++] = mean[j] / used;
+      }
+    }
+    double[] o2 = java.util.Arrays.copyOf(outer, k);
+    java.util.Arrays.sort(o2);
+    double base = o2[k / 2];
+    for (int j = 0; j < m; j++) {
+      if (Math.abs(j * Measure.SAMPLE_PX - CONTINUATION_HALF_PX) <= 2) {
+        best = Math.max(best, Math.abs(mean[j] / used - base));
+      }
+    }
+    return best;
+  }
+
+  /** The first profiles of a short secondary shock start this far from its origin (clear of the incident shock), px. */
+  static final double SHORT_SKIP_PX = 12;
+  /** A short secondary shock must offer this much line in the flow, px. */
+  static final double SHORT_MIN_LENGTH_PX = 20;
+  /**
+   * Profile half-length of a secondary shock, as a fraction of a primary one's: the full length,
+   * since a shorter one biases the centres towards the first candidate (0.28° on a rendered
+   * Mach reflection's reflected shock with 0.6).
+   */
+  static final double WINDOW_FRACTION = 1.0;
+  /** The same for a Mach stem, whose short profiles must stay clear of the masked wall. */
+  static final double STEM_WINDOW_FRACTION = 0.6;
+
+  /**
+   * A shock from a known secondary origin that may be short (it ends where it meets a fan or the
+   * window): the strongest line of the pencil, allowed the broad angular peak of a short line,
+   * measured with at least {@link #SHORT_MIN_LENGTH_PX} of line and ended where its peak fades
+   * ({@link #lineEnd}).
+   */
+  static Optional<WaveDetector.Found> shortShock(WaveDetector.Context ctx, Search s) {
+    double rMax = Math.hypot(ctx.full().width, ctx.full().height);
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), SHORT_SKIP_PX, rMax);
+    AngularScan.Hit h = scan.strongestLine(WaveDetector.MIN_CANDIDATE_SNR, Math.toRadians(6) / scan.step);
+    if (h == null) {
+      return Optional.empty();
+    }
+    int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(h.index())));
+    double s1 = scan.reach[i] - 2;
+    double a = scan.angle(h.index());
+    Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, Math.cos(a), -Math.sin(a), SHORT_SKIP_PX, s1);
+    return measureShort(ctx, c, s.kind(), s.side(), s.feature(), s.origin());
+  }
+
+  /**
+   * The Mach stem below a triple point: profiles along the wall at each height between the triple
+   * point and the wall (the stem stands near-normal to the wall), fitted; kept when it leans less
+   * than {@link #STEM_MAX_LEAN_RAD} from the wall normal.
+   */
+  static Optional<WaveDetector.Found> stem(WaveDetector.Context ctx, Point2 tp, double wallDir, Side solid, Point2 wallPoint) {
+    double toWall = wallDir + solid.sign() * 0.5 * Math.PI;
+    Point2 u = ImageAngles.unit(toWall);
+    Point2 foot = intersectLines(tp, u, wallPoint, ImageAngles.unit(wallDir));
+    if (foot == null) {
+      return Optional.empty();
+    }
+    double s1 = tp.distanceTo(foot);
+    Measure.Candidate c = new Measure.Candidate(tp.x(), tp.y(), u.x(), u.y(), STEM_SKIP_PX, s1);
+    Optional<WaveDetector.Found> f = measureShort(ctx, c, WaveKind.MACH_STEM, solid.opposite(), Feature.TRIPLE_POINT, tp);
+    return f.filter(x -> {
+      LineFit.Result r = x.m().distortedFit();
+      return Math.abs(r.ux() * u.x() + r.uy() * u.y()) >= Math.cos(STEM_MAX_LEAN_RAD);
+    });
+  }
+
+  /** The stem's profiles start this far below the triple point, px. */
+  static final double STEM_SKIP_PX = 3;
+  /** A Mach stem leans at most this far from the wall normal. */
+  static final double STEM_MAX_LEAN_RAD = Math.toRadians(25);
+
+  /**
+   * The accurate stage for a short line: fewer points than a primary wave needs, the segment
+   * ended where the line fades, a third pass for a stem's narrow profiles.
+   */
+  private static Optional<WaveDetector.Found> measureShort(WaveDetector.Context ctx, Measure.Candidate c, WaveKind kind, Side side,
+      Feature feature, Point2 origin) {
+    double usable = c.s1() - c.s0();
+    boolean stemLike = kind == WaveKind.MACH_STEM;
+    if (usable < (stemLike ? 10 : SHORT_MIN_LENGTH_PX)) {
+      return Optional.empty();
+    }
+    Signature sig = ctx.shadow() ? Signature.DIPOLE : Signature.PEAK;
+    double full = ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX;
+    double window = (stemLike ? STEM_WINDOW_FRACTION : WINDOW_FRACTION) * full;
+    int minSupport = (int) Math.max(stemLike ? 8 : 12, 0.2 * usable);
+    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+    if (m == null) {
+      return Optional.empty();
+    }
+    Measure.Candidate c2 = c.recentred(m.distortedFit());
+    if (sig == Signature.PEAK) {
+      double end = lineEnd(ctx.full(), c2, m.sign());
+      if (end < c2.s1()) {
+        // where the line ends another wave begins: keep the profiles clear of it
+        end -= window;
+      }
+      if (end - c2.s0() < minSupport) {
+        return Optional.empty();
+      }
+      c2 = new Measure.Candidate(c2.ox(), c2.oy(), c2.ux(), c2.uy(), c2.s0(), end);
+    }
+    if (stemLike) {
+      // the narrow profile pulls the centres towards the candidate: one more pass from the fit
+      Measure.Result mid = Measure.measure(ctx.full(), c2, sig, window, m.sign(), ctx.noise(), null, minSupport);
+      if (mid != null) {
+        c2 = c2.recentred(mid.distortedFit());
+      }
+    }
+    Measure.Result m2 = Measure.measure(ctx.full(), c2, sig, window, m.sign(), ctx.noise(), ctx.undistort(), minSupport);
+    return m2 == null ? Optional.empty() : Optional.of(new WaveDetector.Found(kind, side, feature, m2, origin));
+  }
+
+  /**
+   * Where a thin line along a candidate ends: the first stretch of {@link #END_RUN_PX} px over
+   * which its peak strength (the centre's rise above the lower of its two sides 3 px out, which a
+   * step such as a fan's edge does not have) stays below {@link #END_RATIO} of its level on the first 20 px.
+   * A shock that meets a fan stops there even when the fan's edge carries on along the same line.
+   */
+  static double lineEnd(Raster r, Measure.Candidate c, int sign) {
+    double nx = -c.uy();
+    double ny = c.ux();
+    int n = (int) Math.floor(c.s1() - c.s0()) + 1;
+    double[] q = new double[n];
+    for (int k = 0; k < n; k++) {
+      double s = c.s0() + k;
+      double px = c.ox() + s * c.ux();
+      double py = c.oy() + s * c.uy();
+      double centre = Math.max(r.sample(px, py), Math.max(r.sample(px + 0.7 * nx, py + 0.7 * ny), r.sample(px - 0.7 * nx, py - 0.7 * ny)));
+      if (sign < 0) {
+        centre = Math.min(r.sample(px, py), Math.min(r.sample(px + 0.7 * nx, py + 0.7 * ny), r.sample(px - 0.7 * nx, py - 0.7 * ny)));
+      }
+      double left = r.sample(px + 3 * nx, py + 3 * ny);
+      double right = r.sample(px - 3 * nx, py - 3 * ny);
+      q[k] = Math.min(sign * (centre - left), sign * (centre - right));
+    }
+    int ref = Math.min(n, 20);
+    double[] head = new double[ref];
+    int h = 0;
+    for (int k = 0; k < ref; k++) {
+      if (!Double.isNaN(q[k])) {
+        head[h++] = q[k];
+      }
+    }
+    if (h < 5) {
+      return c.s1();
+    }
+    double[] sorted = java.util.Arrays.copyOf(head, h);
+    java.util.Arrays.sort(sorted);
+    double level = sorted[h / 2];
+    int low = 0;
+    for (int k = 0; k < n; k++) {
+      low = !Double.isNaN(q[k]) && q[k] < END_RATIO * level ? low + 1 : 0;
+      if (low >= END_RUN_PX) {
+        return c.s0() + k - END_RUN_PX;
+      }
+    }
+    return c.s1();
+  }
+
+  /** A line has ended after this many px in a row below {@link #END_RATIO} of its level. */
+  private static final int END_RUN_PX = 5;
+  private static final double END_RATIO = 0.35;
+
+  /** Intersection of the lines through p along u and through q along v (image vectors). */
+  private static Point2 intersectLines(Point2 p, Point2 u, Point2 q, Point2 v) {
+    double det = u.x() * v.y() - u.y() * v.x();
+    if (Math.abs(det) < 1e-9) {
+      return null;
+    }
+    double t = ((q.x() - p.x()) * v.y() - (q.y() - p.y()) * v.x()) / det;
+    return new Point2(p.x() + t * u.x(), p.y() + t * u.y());
   }
 
   private static WaveDetector.Found first(List<WaveDetector.Found> found, Feature f) {

@@ -83,7 +83,7 @@ public final class WaveDetector {
     for (Search s : searches) {
       found.addAll(run(ctx, s));
     }
-    found.addAll(Secondary.searches(req.shape(), found, ctx).stream().flatMap(s -> run(ctx, s).stream()).toList());
+    found.addAll(Secondary.find(req.shape(), found, ctx));
     List<ObservedWave> out = new ArrayList<>();
     for (Found f : found) {
       out.add(f.toObserved(req.hints()));
