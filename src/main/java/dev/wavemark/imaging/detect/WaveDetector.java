@@ -79,6 +79,9 @@ public final class WaveDetector {
     for (Search s : searches) {
       found.addAll(run(ctx, s));
     }
+    if (req.shape() instanceof BodyShape.Freestream f) {
+      found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
+    }
     found.addAll(Secondary.searches(req.shape(), found, ctx).stream().flatMap(s -> run(ctx, s).stream()).toList());
     List<ObservedWave> out = new ArrayList<>();
     for (Found f : found) {
