@@ -105,8 +105,16 @@ final class AngularScan {
    * {@code minSnr} noise deviations.
    */
   Hit strongestLine(double minSnr, double maxWidthIndex) {
+    return strongestLine(minSnr, maxWidthIndex, true);
+  }
+
+  /**
+   * As {@link #strongestLine(double, double)}; with {@code removePlateau} false the raw profile
+   * is searched (a short pencil, e.g. a reflected shock's, is too narrow for a running median).
+   */
+  Hit strongestLine(double minSnr, double maxWidthIndex, boolean removePlateau) {
     double sigma = noise();
-    double[] q = withoutMedian((int) Math.ceil(PLATEAU_WIDTHS * maxWidthIndex));
+    double[] q = removePlateau ? withoutMedian((int) Math.ceil(PLATEAU_WIDTHS * maxWidthIndex)) : withoutMedian(0);
     int best = -1;
     double bv = 0;
     for (int i = 1; i < q.length - 1; i++) {
@@ -132,10 +140,16 @@ final class AngularScan {
   /** Running-median half-width, in multiples of the widest line accepted. */
   static final double PLATEAU_WIDTHS = 3;
 
-  /** The profile minus its running median over 2w+1 angles (missing angles count as zero). */
+  /** The profile minus its running median over 2w+1 angles (missing angles count as zero); w = 0 gives the profile. */
   double[] withoutMedian(int w) {
     int n = mean.length;
     double[] q = new double[n];
+    if (w == 0) {
+      for (int i = 0; i < n; i++) {
+        q[i] = at(i);
+      }
+      return q;
+    }
     double[] win = new double[2 * w + 1];
     for (int i = 0; i < n; i++) {
       int lo = Math.max(0, i - w);

@@ -198,7 +198,7 @@ final class Secondary {
   static Optional<WaveDetector.Found> shortShock(WaveDetector.Context ctx, Search s) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
     AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), SHORT_SKIP_PX, rMax);
-    AngularScan.Hit h = scan.strongestLine(WaveDetector.MIN_CANDIDATE_SNR, Math.toRadians(6) / scan.step);
+    AngularScan.Hit h = scan.strongestLine(WaveDetector.MIN_CANDIDATE_SNR, Math.toRadians(6) / scan.step, false);
     if (h == null) {
       return Optional.empty();
     }

@@ -70,7 +70,10 @@ public final class WaveDetector {
     double noise = Frames.noise(full);
     Optics optics = req.optics() == Optics.AUTO ? Frames.guessOptics(low) : req.optics();
     UnaryOperator<Point2> und = req.undistort().orElse(null);
-    Context ctx = new Context(full, low, noise, optics, und, req.flowDirectionRad());
+    // a shock generator's triple-point test (Secondary) reads where the incident fit ends, which
+    // it was set for with the full-width second pass; the narrow pass is kept for the others
+    boolean narrow = !(req.shape() instanceof BodyShape.ShockGenerator);
+    Context ctx = new Context(full, low, noise, optics, und, req.flowDirectionRad(), narrow);
 
     List<Search> searches = new ArrayList<>();
     for (Search s : Search.primary(req.shape(), req.flowDirectionRad())) {
@@ -82,6 +85,9 @@ public final class WaveDetector {
     List<Found> found = new ArrayList<>();
     for (Search s : searches) {
       found.addAll(run(ctx, s));
+    }
+    if (req.shape() instanceof BodyShape.Freestream f) {
+      found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
     }
     found.addAll(Secondary.find(req.shape(), found, ctx));
     List<ObservedWave> out = new ArrayList<>();
@@ -118,7 +124,8 @@ public final class WaveDetector {
   }
 
   /** Everything a search needs from the frame. */
-  record Context(Raster full, Raster low, double noise, Optics optics, UnaryOperator<Point2> undistort, double flow) {
+  record Context(Raster full, Raster low, double noise, Optics optics, UnaryOperator<Point2> undistort, double flow,
+      boolean narrowSecondPass) {
     boolean shadow() {
       return optics == Optics.SHADOWGRAPH;
     }
@@ -218,7 +225,7 @@ public final class WaveDetector {
       return null;
     }
     Measure.Candidate c2 = c.recentred(m.distortedFit());
-    return Measure.measure(ctx.full(), c2, sig, secondWindow(sig, window, m.widthPx()), m.sign(), ctx.noise(), ctx.undistort(),
+    return Measure.measure(ctx.full(), c2, sig, ctx.narrowSecondPass() ? secondWindow(sig, window, m.widthPx()) : window, m.sign(), ctx.noise(), ctx.undistort(),
         minSupport);
   }
 }
