@@ -2,12 +2,14 @@ package dev.wavemark.pipeline;
 
 import dev.wavemark.core.Problem;
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.Calibration;
 import dev.wavemark.core.model.RunSpec;
 import dev.wavemark.files.CalibrationFile;
 import dev.wavemark.files.ResultFile;
 import dev.wavemark.files.ResultFrames;
 import dev.wavemark.files.RunFile;
+import dev.wavemark.imaging.calib.LensCorrection;
 import dev.wavemark.imaging.io.Frame;
 import dev.wavemark.imaging.io.FrameRef;
 import dev.wavemark.imaging.io.FrameSequence;
@@ -24,6 +26,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.UnaryOperator;
 import org.jspecify.annotations.Nullable;
 
 /**
@@ -79,8 +82,20 @@ final class RunPipeline {
     ResultFile result = new ResultFile(spec.label(), new ResultFile.Tool("wavemark", version), frames, summary,
         settings(runFile, rf, spec, annotated));
     Path html = Report.write(new Report.Input(result, spec.model(), spec.calibration().flowDirectionRad(), pictures,
-        options.backLink()), outDir);
+        options.backLink(), toPicture(spec, pictures)), outDir);
     return new Outcome(result, html);
+  }
+
+  /** The lens distortion at the pictured frames' size: result pixels (corrected) to picture pixels. */
+  private static UnaryOperator<Point2> toPicture(RunSpec spec, Map<Integer, Picture> pictures) {
+    if (pictures.isEmpty()) {
+      return UnaryOperator.identity();
+    }
+    Picture p = pictures.values().iterator().next();
+    int w = (int) Math.round(p.image().getWidth() / p.scale());
+    int h = (int) Math.round(p.image().getHeight() / p.scale());
+    LensCorrection lens = LensCorrection.of(spec.calibration(), w, h);
+    return lens.isIdentity() ? UnaryOperator.identity() : lens::distort;
   }
 
   static ResultFile.Frame failed(FrameRef ref, String code, String message) {

@@ -16,6 +16,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
+import java.util.function.UnaryOperator;
 import javax.imageio.ImageIO;
 
 /**
@@ -33,7 +34,7 @@ final class Annotator {
   private Annotator() {}
 
   /** The annotated picture as PNG bytes. */
-  static byte[] png(Picture picture, ResultFile.Frame frame, List<List<Point2>> outline) {
+  static byte[] png(Picture picture, ResultFile.Frame frame, List<List<Point2>> outline, UnaryOperator<Point2> toPicture) {
     BufferedImage src = picture.image();
     BufferedImage img = new BufferedImage(src.getWidth(), src.getHeight(), BufferedImage.TYPE_INT_RGB);
     Graphics2D g = img.createGraphics();
@@ -63,7 +64,7 @@ final class Annotator {
           float[] dash = nominal ? new float[] {2 * w, 3 * w} : new float[] {7 * w, 4 * w};
           Stroke st = new BasicStroke(w, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, dash, 0f);
           for (ResultFile.PredictedWave pw : pr.waves()) {
-            stroke(g, line(pw.startPx(), pw.endPx(), s), c, st, w);
+            stroke(g, curve(pw.startPx(), pw.endPx(), s, toPicture), c, st, w);
           }
         }
       }
@@ -71,8 +72,8 @@ final class Annotator {
       g.setFont(font);
       for (int i = 0; i < frame.waves().size(); i++) {
         ResultFile.Wave wave = frame.waves().get(i);
-        Line2D.Double l = line(wave.startPx(), wave.endPx(), s);
-        stroke(g, l, MEASURED, new BasicStroke(1.3f * w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND), w);
+        Line2D.Double l = line(toPicture.apply(pt(wave.startPx())), toPicture.apply(pt(wave.endPx())), s);
+        stroke(g, curve(wave.startPx(), wave.endPx(), s, toPicture), MEASURED, new BasicStroke(1.3f * w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND), w);
         tag(g, "W" + (i + 1), l, img.getWidth(), img.getHeight());
       }
     } finally {
@@ -87,8 +88,33 @@ final class Annotator {
     return out.toByteArray();
   }
 
-  private static Line2D.Double line(double[] a, double[] b, double s) {
-    return new Line2D.Double(a[0] * s, a[1] * s, b[0] * s, b[1] * s);
+  private static Point2 pt(double[] a) {
+    return new Point2(a[0], a[1]);
+  }
+
+  private static Line2D.Double line(Point2 a, Point2 b, double s) {
+    return new Line2D.Double(a.x() * s, a.y() * s, b.x() * s, b.y() * s);
+  }
+
+  /** Points along a straight line of the corrected image, as they lie in the picture. */
+  static final int CURVE_POINTS = 24;
+
+  /**
+   * A straight line of the lens-corrected image (the result's coordinates) as the curve it is
+   * in the photographed picture, scaled to the display copy.
+   */
+  private static Path2D.Double curve(double[] a, double[] b, double s, UnaryOperator<Point2> toPicture) {
+    Path2D.Double p = new Path2D.Double();
+    for (int i = 0; i <= CURVE_POINTS; i++) {
+      double t = (double) i / CURVE_POINTS;
+      Point2 q = toPicture.apply(new Point2(a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])));
+      if (i == 0) {
+        p.moveTo(q.x() * s, q.y() * s);
+      } else {
+        p.lineTo(q.x() * s, q.y() * s);
+      }
+    }
+    return p;
   }
 
   /** A line with a dark halo under it, so that it reads on bright and dark backgrounds alike. */

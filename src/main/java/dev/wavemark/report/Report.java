@@ -14,6 +14,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.UnaryOperator;
 import org.jspecify.annotations.Nullable;
 
 /**
@@ -40,11 +41,19 @@ public final class Report {
    * @param flowDirectionRad the freestream direction in the image (contract sense)
    * @param pictures display copies of the frames to picture, by frame index
    * @param backLink a relative link back to an index page, or null
+   * @param toPicture maps the result's lens-corrected pixels to the photographed picture's (the
+   *     lens distortion), so that lines are drawn where the waves are in the picture
    */
   public record Input(ResultFile result, BodyShape model, double flowDirectionRad, Map<Integer, Picture> pictures,
-      @Nullable String backLink) {
+      @Nullable String backLink, UnaryOperator<Point2> toPicture) {
     public Input {
       pictures = Map.copyOf(pictures);
+    }
+
+    /** An input whose pictures have no lens distortion to draw through. */
+    public Input(ResultFile result, BodyShape model, double flowDirectionRad, Map<Integer, Picture> pictures,
+        @Nullable String backLink) {
+      this(result, model, flowDirectionRad, pictures, backLink, UnaryOperator.identity());
     }
   }
 
@@ -73,7 +82,7 @@ public final class Report {
       double reach = Math.hypot(p.image().getWidth(), p.image().getHeight()) / p.scale();
       List<List<Point2>> outline = ModelOutline.of(in.model(), in.flowDirectionRad(), reach);
       String name = PICTURES + "/" + String.format(Locale.ROOT, "frame-%05d.png", f.index());
-      Json.writeAtomically(dir.resolve(name), Annotator.png(p, f, outline));
+      Json.writeAtomically(dir.resolve(name), Annotator.png(p, f, outline, in.toPicture()));
       pictureFiles.put(f.index(), name);
     }
     r.write(dir.resolve(RESULT_JSON));

@@ -81,4 +81,38 @@ class ReportTest {
     assertEquals(0, s.get(0));
     assertEquals(9_999, s.get(7));
   }
+
+  @Test
+  void measuredLinesAreDrawnThroughTheLensOntoThePicture() throws Exception {
+    // result pixels are lens-corrected; a stand-in distortion that moves everything 40 px down
+    ResultFile.Frame f = Fixtures.frame(0, Fixtures.MACH, "frame-0001.png");
+    ResultFile.Wave w = f.waves().get(0);
+    int mx = (int) Math.round(0.5 * (w.startPx()[0] + w.endPx()[0]));
+    int my = (int) Math.round(0.5 * (w.startPx()[1] + w.endPx()[1]));
+    java.awt.image.BufferedImage plain = png(f, java.util.function.UnaryOperator.identity());
+    java.awt.image.BufferedImage moved = png(f, q -> new dev.wavemark.core.geom.Point2(q.x(), q.y() + 40));
+    assertTrue(redNear(plain, mx, my), "the line is drawn where the result puts it without a lens");
+    assertFalse(redNear(moved, mx, my), "with a lens it is not drawn at the corrected position");
+    assertTrue(redNear(moved, mx, my + 40), "it is drawn where the lens puts it in the picture");
+  }
+
+  private static java.awt.image.BufferedImage png(ResultFile.Frame f, java.util.function.UnaryOperator<dev.wavemark.core.geom.Point2> lens)
+      throws Exception {
+    byte[] b = Annotator.png(Fixtures.picture(), f, List.of(), lens);
+    return javax.imageio.ImageIO.read(new java.io.ByteArrayInputStream(b));
+  }
+
+  private static boolean redNear(java.awt.image.BufferedImage img, int x, int y) {
+    for (int dy = -2; dy <= 2; dy++) {
+      for (int dx = -2; dx <= 2; dx++) {
+        int rgb = img.getRGB(x + dx, y + dy);
+        int r = (rgb >> 16) & 0xff;
+        int g = (rgb >> 8) & 0xff;
+        if (r > 200 && g < 140) {
+          return true;
+        }
+      }
+    }
+    return false;
+  }
 }
