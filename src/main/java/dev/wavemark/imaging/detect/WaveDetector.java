@@ -140,7 +140,7 @@ public final class WaveDetector {
       Point2 start = c.plus(u.times(f.startAlong()));
       Point2 end = c.plus(u.times(f.endAlong()));
       double dir = ImageAngles.direction(f.ux(), f.uy());
-      double sigma = Uncertainty.total(f);
+      double sigma = kind.isShock() || kind == WaveKind.MACH_WAVE ? Uncertainty.total(f) : Uncertainty.totalForFan(f);
       FittedLine line = new FittedLine(c, dir, sigma, start, end, f.support(), f.rmsPx(), f.curved());
       return new ObservedWave(kind, Optional.of(side), line, m.amplitude(), m.widthPx(), Optional.of(feature));
     }
