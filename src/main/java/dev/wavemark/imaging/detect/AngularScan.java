@@ -78,6 +78,26 @@ final class AngularScan {
     return new AngularScan(ox, oy, a0, step, mean, reach, rMin);
   }
 
+  /**
+   * Shortens every ray to end {@code margin} px before the line through (cx, cy) along (ux, uy)
+   * (frame px), where the ray meets it ahead of the origin.
+   */
+  void clipAt(double cx, double cy, double ux, double uy, double margin) {
+    for (int i = 0; i < reach.length; i++) {
+      double a = angle(i);
+      double dx = Math.cos(a);
+      double dy = -Math.sin(a);
+      double det = dx * uy - dy * ux;
+      if (Math.abs(det) < 1e-9) {
+        continue;
+      }
+      double t = ((cx - ox) * uy - (cy - oy) * ux) / det;
+      if (t > 0) {
+        reach[i] = Math.max(0, Math.min(reach[i], t - margin));
+      }
+    }
+  }
+
   /** Robust noise of the profile: the MAD of its first differences, over sqrt 2. */
   double noise() {
     double[] d = new double[mean.length];

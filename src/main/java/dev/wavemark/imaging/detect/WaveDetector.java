@@ -84,7 +84,8 @@ public final class WaveDetector {
     }
     List<Found> found = new ArrayList<>();
     for (Search s : searches) {
-      found.addAll(run(ctx, s));
+      // a double ramp's second shock ends where it meets the first; beyond lies the merged shock
+      found.addAll(run(ctx, s, s.feature() == Feature.SECOND_CORNER ? shockOf(found, Feature.CORNER) : null));
     }
     if (req.shape() instanceof BodyShape.Freestream f) {
       found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
@@ -148,8 +149,29 @@ public final class WaveDetector {
 
   /** Runs one search: the pencil, the best candidate(s), the accurate measurement. */
   static List<Found> run(Context ctx, Search s) {
+    return run(ctx, s, null);
+  }
+
+  /** The first measured shock from feature {@code f}, or null. */
+  private static LineFit.@org.jspecify.annotations.Nullable Result shockOf(List<Found> found, Feature f) {
+    for (Found x : found) {
+      if (x.feature() == f && x.kind().isShock()) {
+        return x.m().distortedFit();
+      }
+    }
+    return null;
+  }
+
+  /**
+   * Runs one search; with {@code stop} given, each ray of the pencil ends a profile window short
+   * of that line (another wave the searched one runs into).
+   */
+  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
     AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax);
+    if (stop != null) {
+      scan.clipAt(stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX);
+    }
     double rTyp = 250;
     List<Found> out = new ArrayList<>();
     if (!s.fan()) {
