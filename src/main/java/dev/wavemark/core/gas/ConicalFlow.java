@@ -5,6 +5,7 @@ import dev.wavemark.core.WavemarkException;
 import dev.wavemark.core.numeric.Checks;
 import dev.wavemark.core.numeric.Roots;
 import java.util.function.DoubleUnaryOperator;
+import org.jspecify.annotations.Nullable;
 
 /**
  * Supersonic flow past a right circular cone at zero incidence with an attached conical shock
@@ -16,8 +17,12 @@ import java.util.function.DoubleUnaryOperator;
  * Proc. Roy. Soc. A 139 (1933) 278-311; the equation as in Anderson, "Modern Compressible Flow",
  * 3rd ed., sec. 10.4, eq. 10.15 (from memory); checked against J. L. Sims, "Tables for supersonic
  * flow around right circular cones at zero angle of attack", NASA SP-3004 (1964) and the cone
- * charts of NACA Report 1135 (Charts 5-7). The integration and the root finding are Hipparchus'
- * (Dormand-Prince 8(5,3) with event detection; bracketing Brent through {@link Roots}).
+ * charts of NACA Report 1135 (Charts 5-7). The integration is Hipparchus' Dormand-Prince 8(5,3).
+ * The shock angle and the inverse are found by Newton's method on the distance of the cone
+ * surface from the given cone ray, with the exact slope from the variational equations
+ * integrated alongside (see {@link TaylorMaccoll#mismatch}); where Newton cannot go on (near
+ * detachment) a bracketing Brent search through {@link Roots} on the surface found by event
+ * detection takes over.
  *
  * <p>All angles in radians. The weak (attached, usually supersonic-behind) solution is meant
  * throughout. Methods are thread-safe.
@@ -26,10 +31,10 @@ public final class ConicalFlow {
   /** Default integration tolerance (absolute and relative, on velocities of order 1). */
   public static final double DEFAULT_TOLERANCE = 1e-9;
 
-  /** The first step from the estimate overshoots by this factor, so that it usually brackets the root. */
-  private static final double OVERSHOOT = 1.1;
-  /** Pegasus stops at |f| below this times the root tolerance, f being scaled to units of the unknown. */
-  private static final double FUNCTION_TOLERANCE = 0.01;
+  /** The integration tolerance of the first Newton step, taken from the rough closed-form estimate. */
+  private static final double LOOSE_TOLERANCE = 1e-6;
+  /** Newton steps (in x, see {@link #estimate}) longer than this are taken from loose integrations. */
+  private static final double LOOSE_STEP = 1e-3;
 
   private final TaylorMaccoll equation;
 
@@ -94,9 +99,13 @@ public final class ConicalFlow {
       double sw = Math.sin(wedge);
       double x0 = estimate(coneRad);
       double beta0 = Math.asin(Math.min(1, Math.sqrt(x0 * x0 + invM2)));
-      double x = solveNear("conical shock angle", xx -> f.applyAsDouble(Math.asin(Math.sqrt(xx * xx + invM2))), x0,
-          estimateSlope(coneRad), 0, -coneRad, Math.sqrt(Math.max(0, sw * sw - invM2)),
-          searchTolerance() * 0.5 * Math.sin(2 * beta0) / x0);
+      double x = newton((xx, loose) -> {
+        double sb = Math.sqrt(xx * xx + invM2);
+        double beta = Math.asin(sb);
+        double[] r = equation.mismatch(m, beta, coneRad, TaylorMaccoll.Parameter.SHOCK_ANGLE, tolerance(loose));
+        // d beta / dx = x / (sin beta cos beta)
+        return r == null ? null : new double[] {r[0], r[1] * xx / (sb * Math.cos(beta))};
+      }, x0, 0, Math.sqrt(Math.max(0, sw * sw - invM2)), searchTolerance() * 0.5 * Math.sin(2 * beta0) / x0);
       if (!Double.isNaN(x)) {
         return Math.asin(Math.sqrt(x * x + invM2));
       }
@@ -165,9 +174,15 @@ public final class ConicalFlow {
     double xHi = Math.sqrt(sb2 - 1e-8);
     double x0 = Math.min(estimate(coneRad), 0.999 * xHi);
     double m0 = 1 / Math.sqrt(sb2 - x0 * x0);
-    double x = solveNear("Mach number from the conical shock angle",
-        xx -> coneAt(1 / Math.sqrt(sb2 - xx * xx), shockRad) - coneRad, x0, estimateSlope(coneRad), 0, -coneRad, xHi,
-        (1e-12 * m0 + searchTolerance()) / (x0 * m0 * m0 * m0));
+    double x = newton((xx, loose) -> {
+        double mm = 1 / Math.sqrt(sb2 - xx * xx);
+        if (mm * Math.sin(shockRad) <= 1) {
+          return null;
+        }
+        double[] r = equation.mismatch(mm, shockRad, coneRad, TaylorMaccoll.Parameter.MACH, tolerance(loose));
+        // dM / dx = x M^3
+        return r == null ? null : new double[] {r[0], r[1] * xx * mm * mm * mm};
+      }, x0, 0, xHi, (1e-12 * m0 + searchTolerance()) / (x0 * m0 * m0 * m0));
     if (!Double.isNaN(x)) {
       return 1 / Math.sqrt(sb2 - x * x);
     }
@@ -200,53 +215,55 @@ public final class ConicalFlow {
     return Math.sqrt(0.5 * (gamma() + 1)) * Math.sin(coneRad);
   }
 
-  /** dx/d(theta_c) of {@link #estimate}. */
-  private double estimateSlope(double coneRad) {
-    return Math.sqrt(0.5 * (gamma() + 1)) * Math.max(Math.cos(coneRad), 0.05);
+  /** One evaluation for {@link #newton}: {f(x), f'(x)}, or null when the integration fails to reach a surface. */
+  private interface WithSlope {
+    double @Nullable [] at(double x, boolean loose);
   }
 
   /**
-   * The root of an increasing f on (lo, hi) started from an estimate x0 with dx/df &asymp; slope,
-   * where f(lo) = {@code fLo} &lt; 0 is known without evaluation: a Newton-like step with that
-   * slope, then secant steps, until two points bracket the root (usually the first two); then
-   * Hipparchus' Pegasus solver through {@link Roots#refine} on f scaled by the secant slope, so
-   * that its function tolerance is in units of x. Points stay inside (lo, hi), moving at most
-   * halfway to a bound per step; a step that would pass lo brackets with lo itself. Returns NaN
-   * when no bracket turns up within a few steps or an evaluation fails, for the caller's slower,
-   * surer search.
+   * The root of an increasing f on (lo, hi) by Newton's method from the estimate x0, with the exact
+   * slope that the variational equations give alongside each integration. Evaluations are made at
+   * the loose {@link #LOOSE_TOLERANCE} while the steps are longer than {@link #LOOSE_STEP} (the
+   * estimate is up to a degree off, so the integration's own error does not matter there), and at
+   * the solver's tolerance after that. The
+   * iteration stops, without a further evaluation, when the predicted error of the last step,
+   * c dx^2 with the curvature c = f''/(2 f') estimated from the last two slopes, is below a tenth of
+   * {@code tol}. A step that leaves (lo, hi) goes halfway to the bound instead. Returns NaN when f'
+   * is not positive (near detachment, where f' vanishes), an evaluation fails, or 12 steps do not
+   * converge, for the caller's slower, surer bracketing search.
    *
-   * @param tol root tolerance in x; the search stops once |f| / slope is below
-   *     {@link #FUNCTION_TOLERANCE} times it
+   * <p>Hand-written rather than Hipparchus' NewtonRaphsonSolver, which takes its derivative from a
+   * separate function and evaluates once more at the answer; here one integration yields f and f'
+   * together and the last one is not needed.
    */
-  private static double solveNear(String what, DoubleUnaryOperator f, double x0, double slope, double lo, double fLo,
-      double hi, double tol) {
+  private static double newton(WithSlope f, double x0, double lo, double hi, double tol) {
     try {
       double x = Math.max(x0, lo + 1e-3 * (hi - lo));
-      double fx = f.applyAsDouble(x);
-      double k = slope;
-      for (int step = 0; step < 6; step++) {
-        if (fx == 0) {
-          return x;
-        }
-        double newton = x - OVERSHOOT * fx * k;
-        if (newton <= lo && fx > 0) {
-          return refine(what, f, lo, fLo, x, fx, (x - lo) / (fx - fLo), tol);
-        }
-        double next = Math.min(Math.max(newton, x - 0.5 * (x - lo)), x + 0.5 * (hi - x));
-        double fn = f.applyAsDouble(next);
-        if (fn == 0) {
-          return next;
-        }
-        if (Math.signum(fn) != Math.signum(fx)) {
-          return refine(what, f, x, fx, next, fn, (next - x) / (fn - fx), tol);
-        }
-        double secant = (next - x) / (fn - fx);
-        if (!(secant > 0 && Double.isFinite(secant))) {
+      double prevX = Double.NaN;
+      double prevSlope = Double.NaN;
+      double lastDx = Double.NaN;
+      for (int step = 0; step < 12; step++) {
+        boolean loose = step == 0 || Math.abs(lastDx) > LOOSE_STEP;
+        double[] r = f.at(x, loose);
+        if (r == null || !(r[1] > 0) || !Double.isFinite(r[0])) {
           return Double.NaN;
         }
-        k = secant;
+        double dx = r[0] / r[1];
+        double next = x - dx;
+        if (next <= lo) {
+          next = 0.5 * (x + lo);
+        } else if (next >= hi) {
+          next = 0.5 * (x + hi);
+        } else if (!loose) {
+          double curvature = Math.max(1, Math.abs(r[1] - prevSlope) / (2 * r[1] * Math.abs(x - prevX)));
+          if (curvature * dx * dx < 0.1 * tol) {
+            return next;
+          }
+        }
+        prevX = x;
+        prevSlope = r[1];
+        lastDx = next - x;
         x = next;
-        fx = fn;
       }
       return Double.NaN;
     } catch (WavemarkException e) {
@@ -254,11 +271,9 @@ public final class ConicalFlow {
     }
   }
 
-  private static double refine(String what, DoubleUnaryOperator f, double a, double fa, double b, double fb,
-      double secant, double tol) {
-    double scale = Math.abs(secant);
-    return Roots.refine(what, v -> scale * f.applyAsDouble(v), a, scale * fa, b, scale * fb, tol,
-        FUNCTION_TOLERANCE * tol, Roots.DEFAULT_BUDGET);
+  /** The integration tolerance of a Newton evaluation. */
+  private double tolerance(boolean loose) {
+    return loose ? Math.max(LOOSE_TOLERANCE, equation.tolerance()) : equation.tolerance();
   }
 
   /** The flow field for Mach m and cone half-angle {@code coneRad}. */

@@ -4,7 +4,6 @@ import dev.wavemark.core.Problem;
 import dev.wavemark.core.WavemarkException;
 import java.util.function.DoubleUnaryOperator;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
-import org.hipparchus.analysis.solvers.PegasusSolver;
 import org.hipparchus.exception.MathIllegalArgumentException;
 import org.hipparchus.exception.MathIllegalStateException;
 
@@ -48,45 +47,6 @@ public final class Roots {
     BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-14, absTol, 1e-300, 5);
     try {
       return solver.solve(budget, f::applyAsDouble, lo, hi);
-    } catch (MathIllegalStateException | MathIllegalArgumentException e) {
-      throw new WavemarkException(
-          e, Problem.SOLVER_FAILED, what, budget,
-          "[" + WavemarkException.num(lo) + ", " + WavemarkException.num(hi) + "]");
-    }
-  }
-
-  /**
-   * Refines a root already bracketed by [a, b], whose function values {@code fa} and {@code fb}
-   * (of opposite signs) are known, so they are not computed again: Hipparchus' {@link PegasusSolver}
-   * (a regula falsi with superlinear convergence that keeps the bracket). It stops when the bracket
-   * is narrower than {@code absTol} or as soon as |f| &le; {@code fTol} at one point, which lets a
-   * caller that has scaled f to units of x stop one costly evaluation earlier than a
-   * two-sided bracket test would.
-   *
-   * @throws WavemarkException {@link Problem#NO_SOLUTION} when fa and fb do not bracket a root,
-   *     {@link Problem#SOLVER_FAILED} when the budget runs out
-   */
-  public static double refine(
-      String what, DoubleUnaryOperator f, double a, double fa, double b, double fb, double absTol, double fTol,
-      int budget) {
-    if (fa == 0) {
-      return a;
-    }
-    if (fb == 0) {
-      return b;
-    }
-    if (!(Math.signum(fa) * Math.signum(fb) < 0)) {
-      throw new WavemarkException(
-          Problem.NO_SOLUTION,
-          what + ": no root in [" + WavemarkException.num(a) + ", " + WavemarkException.num(b) + "]");
-    }
-    double lo = Math.min(a, b);
-    double hi = Math.max(a, b);
-    double flo = lo == a ? fa : fb;
-    double fhi = lo == a ? fb : fa;
-    PegasusSolver solver = new PegasusSolver(1e-14, absTol, fTol);
-    try {
-      return solver.solve(budget, x -> x == lo ? flo : x == hi ? fhi : f.applyAsDouble(x), lo, hi);
     } catch (MathIllegalStateException | MathIllegalArgumentException e) {
       throw new WavemarkException(
           e, Problem.SOLVER_FAILED, what, budget,

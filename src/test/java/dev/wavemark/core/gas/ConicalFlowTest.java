@@ -59,12 +59,17 @@ class ConicalFlowTest {
   void convergesAsTheToleranceTightens(double m, double coneDeg) {
     double cone = Math.toRadians(coneDeg);
     double best = ConicalFlow.of(GAMMA, 1e-13).shockAngle(m, cone);
+    // Every tolerance keeps the error within 100 tol; from 1e-7 down the error also shrinks
+    // with each tightening. At 1e-5 an answer can be close by chance (M = 10, 20 deg: 4e-10 rad,
+    // measured, where 1e-7 gives 8e-10), so that one is held to the bound alone.
     double previous = Double.POSITIVE_INFINITY;
     for (double tol : new double[] {1e-5, 1e-7, 1e-9, 1e-11}) {
       double err = Math.abs(ConicalFlow.of(GAMMA, tol).shockAngle(m, cone) - best);
-      assertTrue(err <= Math.max(previous, 1e-12), "tol " + tol + " error " + err + " previous " + previous);
+      if (tol < 1e-6) {
+        assertTrue(err <= Math.max(previous, 1e-12), "tol " + tol + " error " + err + " previous " + previous);
+        previous = err;
+      }
       assertTrue(err < 100 * tol, "tol " + tol + " error " + err);
-      previous = err;
     }
   }
 
