@@ -60,7 +60,8 @@ public record ResultFile(
    * A measured wave. Contract fields first; then the extension: the matched theoretical wave's
    * {@code label}, whether the straightness test found it {@code curved}, the body
    * {@code deflectionDeg} that theory used for it, and the wave angle theory predicts at the
-   * inferred and at the nominal Mach number.
+   * inferred and at the nominal Mach number; for a wave checked by its direction (a slip line),
+   * the {@code check} of that direction against theory.
    */
   @JsonPropertyOrder({"kind", "side", "angleDeg", "uncertaintyDeg", "startPx", "endPx", "support", "rmsResidualPx"})
   public record Wave(
@@ -70,7 +71,17 @@ public record ResultFile(
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Boolean curved,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double deflectionDeg,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double theoryAngleDeg,
-      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double nominalTheoryAngleDeg) {}
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double nominalTheoryAngleDeg,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable DirectionCheck check) {}
+
+  /**
+   * Extension: a measured direction against theory's, both counter-clockwise on screen from the
+   * freestream direction, degrees; the difference (measured minus theory) in degrees and in the
+   * line's standard uncertainties ({@code differenceSigma}, absent without an uncertainty).
+   */
+  public record DirectionCheck(
+      double measuredDirectionDeg, double theoryDirectionDeg, double differenceDeg,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double differenceSigma) {}
 
   /**
    * The frame's Mach number and the estimates it combines. Extension: the consistency test

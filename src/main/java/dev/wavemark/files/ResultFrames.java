@@ -10,6 +10,7 @@ import dev.wavemark.core.model.RunSpec;
 import dev.wavemark.core.model.WaveKind;
 import dev.wavemark.core.numeric.Measured;
 import dev.wavemark.inference.BudgetLine;
+import dev.wavemark.inference.DirectionCheck;
 import dev.wavemark.inference.FrameInference;
 import dev.wavemark.inference.MachEstimate;
 import dev.wavemark.inference.RunSummary;
@@ -103,7 +104,7 @@ public final class ResultFrames {
     if (m == null) {
       return new ResultFile.Wave(o.kind().contractName(), o.side().map(s -> s.contractName()).orElse(null),
           Math.toDegrees(ImageAngles.acuteToFlow(l.directionRad(), flowRad)), Math.toDegrees(l.directionUncertaintyRad()),
-          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null);
+          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null, null);
     }
     ExpectedWave e = m.expected();
     Double deflection = null;
@@ -124,7 +125,13 @@ public final class ResultFrames {
     }
     return new ResultFile.Wave(e.kind().contractName(), e.side().contractName(), Math.toDegrees(m.measuredAngleRad()),
         Math.toDegrees(m.measuredUncertaintyRad()), px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), e.label(),
-        l.curved(), deflection, Math.toDegrees(m.predictedAngleRad()), atNominal);
+        l.curved(), deflection, Math.toDegrees(m.predictedAngleRad()), atNominal,
+        DirectionCheck.of(o, m, flowRad).map(ResultFrames::check).orElse(null));
+  }
+
+  private static ResultFile.DirectionCheck check(DirectionCheck c) {
+    return new ResultFile.DirectionCheck(Math.toDegrees(c.measuredRad()), Math.toDegrees(c.predictedRad()),
+        Math.toDegrees(c.differenceRad()), Double.isFinite(c.differenceSigma()) ? c.differenceSigma() : null);
   }
 
   private static List<ResultFile.PredictedWave> predictedWaves(List<ExpectedWave> ws) {

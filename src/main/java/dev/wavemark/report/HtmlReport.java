@@ -138,7 +138,7 @@ final class HtmlReport {
   private static ReportPage.FrameView frameView(ResultFile.Frame f, @Nullable String picture) {
     if (f.failed()) {
       return new ReportPage.FrameView(f.index(), f.file(), null, Fmt.UNKNOWN, Fmt.UNKNOWN, "", List.of(), List.of(), null,
-          List.of(), Fmt.UNKNOWN, List.of(), f.warnings(), f.error().message() + " [" + f.error().code() + "]");
+          List.of(), Fmt.UNKNOWN, List.of(), f.warnings(), f.error().message() + " [" + f.error().code() + "]", List.of());
     }
     List<ReportPage.WaveRow> waves = new ArrayList<>();
     for (int i = 0; i < f.waves().size(); i++) {
@@ -149,6 +149,16 @@ final class HtmlReport {
           Fmt.fixed(w.theoryAngleDeg(), 3), Fmt.fixed(w.nominalTheoryAngleDeg(), 3), Fmt.fixed(w.deflectionDeg(), 2),
           e == null ? Fmt.UNKNOWN : Fmt.pm(e.value(), e.uncertainty(), 4), Integer.toString(w.support()),
           Fmt.fixed(w.rmsResidualPx(), 2), Boolean.TRUE.equals(w.curved())));
+    }
+    List<ReportPage.CheckRow> checks = new ArrayList<>();
+    for (int i = 0; i < f.waves().size(); i++) {
+      ResultFile.Wave w = f.waves().get(i);
+      ResultFile.DirectionCheck c = w.check();
+      if (c != null) {
+        checks.add(new ReportPage.CheckRow("W" + (i + 1), w.label() == null ? w.kind() : w.label(),
+            Fmt.pm(c.measuredDirectionDeg(), w.uncertaintyDeg(), 3), Fmt.fixed(c.theoryDirectionDeg(), 3),
+            Fmt.fixed(c.differenceDeg(), 3), Fmt.fixed(c.differenceSigma(), 1)));
+      }
     }
     List<ReportPage.EstimateRow> estimates = new ArrayList<>();
     String consistency = null;
@@ -185,7 +195,7 @@ final class HtmlReport {
     String reflection = rf == null ? Fmt.UNKNOWN : rf.verdict();
     String reason = rf == null ? "" : "predicted " + rf.predicted() + ", observed " + rf.observed() + (rf.reason().isEmpty() ? "" : "; " + rf.reason());
     return new ReportPage.FrameView(f.index(), f.file(), picture, mach, reflection, reason, waves, estimates, consistency,
-        budget, Fmt.fixed(Math.sqrt(total2), 5), predictions, f.warnings(), null);
+        budget, Fmt.fixed(Math.sqrt(total2), 5), predictions, f.warnings(), null, checks);
   }
 
   private static List<ReportPage.Fact> settings(ResultFile r) {

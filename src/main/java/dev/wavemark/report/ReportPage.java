@@ -38,7 +38,10 @@ public record ReportPage(
   public record FrameView(
       int index, String file, @Nullable String picture, String mach, String reflection, String reflectionReason,
       List<WaveRow> waves, List<EstimateRow> estimates, @Nullable String consistency, List<BudgetRow> budget,
-      String budgetTotal, List<String> predictions, List<String> warnings, @Nullable String error) {}
+      String budgetTotal, List<String> predictions, List<String> warnings, @Nullable String error, List<CheckRow> checks) {}
+
+  /** A wave checked by its direction (a slip line): measured and theory directions from the freestream, the difference. */
+  public record CheckRow(String tag, String label, String measured, String theory, String difference, String sigmas) {}
 
   /** A measured wave with its theory values. */
   public record WaveRow(

@@ -41,6 +41,36 @@ class ReportTest {
   }
 
   @Test
+  void aSlipLineCheckIsTabulatedAndWrittenToTheResult() throws Exception {
+    // a double ramp (8 + 8 deg at M 3): theory's slip line from the core's same-family
+    // intersection, the measured line turned 0.4 deg from it with a 0.05 deg uncertainty
+    dev.wavemark.core.model.BodyShape.Wall floor = new dev.wavemark.core.model.BodyShape.Wall(
+        new dev.wavemark.core.geom.Point2(0, 600), new dev.wavemark.core.geom.Point2(1000, 600), dev.wavemark.core.model.Side.LOWER);
+    var ramp = new dev.wavemark.core.model.BodyShape.DoubleRamp(Math.toRadians(8), new dev.wavemark.core.geom.Point2(300, 600),
+        Math.toRadians(8), new dev.wavemark.core.geom.Point2(450, 600), floor);
+    var slip = dev.wavemark.core.model.WavePattern.of(ramp, 3.0, 1.4, 0, 1024, 768).stream()
+        .filter(e -> e.kind() == dev.wavemark.core.model.WaveKind.SLIP_LINE).findFirst().orElseThrow();
+    double theory = Math.toDegrees(slip.directionRad());
+    ResultFile.Wave w = new ResultFile.Wave("slip-line", "upper", 0.4, 0.05, new double[] {slip.startPx().x(), slip.startPx().y()},
+        new double[] {slip.endPx().x(), slip.endPx().y()}, 300, 0.2, slip.label(), false, null, 0.0, 0.0,
+        new ResultFile.DirectionCheck(theory + 0.4, theory, 0.4, 8.0));
+    ResultFile.Frame f0 = Fixtures.frame(0, Fixtures.MACH, "frame-0001.png");
+    List<ResultFile.Wave> waves = new java.util.ArrayList<>(f0.waves());
+    waves.add(w);
+    ResultFile.Frame f = new ResultFile.Frame(f0.index(), f0.file(), waves, f0.mach(), f0.reflection(), f0.warnings(), f0.error(),
+        f0.budget(), f0.predicted(), f0.tunnel());
+    Path html = Report.write(new Report.Input(Fixtures.result("slip", List.of(f)), Fixtures.WEDGE, 0, Map.of(), null), dir);
+    String page = Files.readString(html);
+    assertTrue(page.contains("Slip lines against intersection theory"), "the check table is shown");
+    assertTrue(page.contains(String.format(java.util.Locale.ROOT, "%.3f", theory)), "theory's direction is shown");
+    assertTrue(page.contains("8.0"), "the difference in sigmas is shown");
+    String json = Files.readString(dir.resolve("result.json"));
+    assertTrue(json.contains("\"measuredDirectionDeg\"") && json.contains("\"differenceSigma\""), "the check is in result.json");
+    ResultFile.DirectionCheck back = ResultFile.read(dir.resolve("result.json")).frames().get(0).waves().get(2).check();
+    assertEquals(0.4, back.differenceDeg(), 1e-12);
+  }
+
+  @Test
   void aSequenceGetsTheMachChartAndABoundedPictureSelection() throws Exception {
     List<ResultFile.Frame> frames = new java.util.ArrayList<>();
     for (int i = 0; i < 30; i++) {

@@ -3,6 +3,7 @@ package dev.wavemark.imaging.detect;
 import dev.wavemark.core.geom.ImageAngles;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.BodyShape;
+import dev.wavemark.core.model.ExpectedWave;
 import dev.wavemark.core.model.Feature;
 import dev.wavemark.core.model.Side;
 import dev.wavemark.core.model.WaveKind;
@@ -13,8 +14,11 @@ import java.util.Optional;
 /**
  * Waves that start where other waves end: a reflected shock at the wall impingement point (or,
  * when the incident shock stops short of the wall, a Mach stem and a reflected shock at the
- * triple point), transmitted shocks where two shocks cross, the merged shock of a double ramp.
- * Their origins come from the primary waves already measured, not from a Mach number.
+ * triple point), transmitted shocks where two shocks cross, the merged shock and the reflected
+ * wave of a double ramp, and the slip lines that leave a triple point, a crossing, a double
+ * ramp's meeting point or a sharp trailing edge. Their origins come from the primary waves
+ * already measured, not from a Mach number; the theory waves (hints), when given, only narrow
+ * the directions searched.
  */
 final class Secondary {
   private Secondary() {}
@@ -29,14 +33,21 @@ final class Secondary {
   static final double TRIPLE_POINT_GAP_PX = 25;
 
   /** The secondary waves of a frame, measured. */
-  static List<WaveDetector.Found> find(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
+  static List<WaveDetector.Found> find(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx,
+      List<ExpectedWave> hints) {
     if (shape instanceof BodyShape.ShockGenerator g) {
-      return reflection(g, found, ctx);
+      return reflection(g, found, ctx, hints);
     }
     List<WaveDetector.Found> out = new ArrayList<>();
     for (Search s : searches(shape, found, ctx)) {
       out.addAll(WaveDetector.run(ctx, s));
     }
+    if (shape instanceof BodyShape.DoubleRamp r) {
+      rampReflection(r, found, ctx, hints).ifPresent(out::add);
+    }
+    List<WaveDetector.Found> all = new ArrayList<>(found);
+    all.addAll(out);
+    slipSearch(shape, all, ctx).ifPresent(s -> slipLine(ctx, s, all, hints).ifPresent(out::add));
     return out;
   }
 
@@ -45,7 +56,8 @@ final class Secondary {
    * impingement point when the incident shock reaches the wall, else a Mach stem and a reflected
    * shock from where it stops (the triple point).
    */
-  static List<WaveDetector.Found> reflection(BodyShape.ShockGenerator g, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
+  static List<WaveDetector.Found> reflection(BodyShape.ShockGenerator g, List<WaveDetector.Found> found, WaveDetector.Context ctx,
+      List<ExpectedWave> hints) {
     List<WaveDetector.Found> out = new ArrayList<>();
     WaveDetector.Found inc = first(found, Feature.LEADING_EDGE);
     if (inc == null) {
@@ -64,6 +76,10 @@ final class Secondary {
       stem(ctx, tp, w, g.wall().solidSide(), g.wall().a()).ifPresent(out::add);
       Search r = Search.wallShock(tp, w, 0, away, WaveKind.REFLECTED_SHOCK, Feature.TRIPLE_POINT);
       shortShock(ctx, r).ifPresent(out::add);
+      List<WaveDetector.Found> all = new ArrayList<>(found);
+      all.addAll(out);
+      // the slip line leaves the triple point downstream, close to the wall's direction
+      slipLine(ctx, new SlipSearch(tp, w, away, Feature.TRIPLE_POINT), all, hints).ifPresent(out::add);
     } else {
       Search r = Search.shock(hit, w + away.sign() * EPS, w + away.sign() * NEAR_NORMAL, WaveKind.REFLECTED_SHOCK, away,
           Feature.IMPINGEMENT);
@@ -93,6 +109,178 @@ final class Secondary {
     }
     return out;
   }
+
+  /**
+   * A slip line's search: where it starts, the direction geometry alone expects (the flow's
+   * direction there, without a Mach number), its side and feature.
+   */
+  record SlipSearch(Point2 origin, double guessRad, Side side, Feature feature) {}
+
+  /**
+   * Half-width of the sector searched for a slip line around its predicted (or geometric)
+   * direction: several times the few tenths of a degree the theory can be off by, so that the
+   * line measured is the picture's, not the hint's, and narrow enough to leave the shocks from
+   * the same point (at least about 20 degrees away) out.
+   */
+  static final double SLIP_WINDOW_RAD = Math.toRadians(7);
+  /** The slip-line sector stays this far from the direction of a shock measured from the same point. */
+  static final double SLIP_CLEAR_RAD = Math.toRadians(4);
+  /** Hints this close to the searched origin describe the same meeting point, px. */
+  static final double HINT_ORIGIN_PX = 40;
+  /**
+   * A slip line is kept only when its mean profile stands this many standard errors above the
+   * noise (the frame noise over the square root of the profiles averaged): a slip line is a
+   * weak line, several times fainter than the shocks beside it, and noise or a neighbour's tail
+   * must not pass for one.
+   */
+  static final double SLIP_MIN_SNR = 12;
+
+  /** The slip-line search of a shape with no triple point (handled by {@link #reflection}), if it makes one. */
+  static Optional<SlipSearch> slipSearch(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx) {
+    if (shape instanceof BodyShape.DoubleRamp r) {
+      Point2 x = crossing(found, Feature.CORNER, Feature.SECOND_CORNER, ctx);
+      if (x == null) {
+        return Optional.empty();
+      }
+      Side s = r.wall().solidSide().opposite();
+      double w = Search.wallDirection(r.wall(), ctx.flow());
+      // the slip line leaves the meeting point along the flow behind the second shock
+      return Optional.of(new SlipSearch(x, w + s.sign() * (r.deflectionRad() + r.secondDeflectionRad()), s, Feature.INTERSECTION));
+    } else if (shape instanceof BodyShape.TwinGenerators t) {
+      Point2 x = crossing(found, Feature.LEADING_EDGE, Feature.LEADING_EDGE, ctx);
+      if (x == null) {
+        return Optional.empty();
+      }
+      // each generator turns the flow towards the other: the streams meet near the mean of the two turns
+      double guess = ctx.flow() + 0.5 * (t.lowerDeflectionRad() - t.upperDeflectionRad());
+      return Optional.of(new SlipSearch(x, guess, Side.UPPER, Feature.INTERSECTION));
+    } else if (shape instanceof BodyShape.Diamond d) {
+      double ax = ctx.flow() - d.incidenceRad();
+      return Optional.of(new SlipSearch(Search.offset(d.leadingEdgePx(), ax, d.chordPx(), 0), ctx.flow(), Side.UPPER,
+          Feature.TRAILING_EDGE));
+    } else if (shape instanceof BodyShape.FlatPlate p) {
+      double ax = ctx.flow() - p.incidenceRad();
+      return Optional.of(new SlipSearch(Search.offset(p.leadingEdgePx(), ax, p.chordPx(), 0), ctx.flow(), Side.UPPER,
+          Feature.TRAILING_EDGE));
+    }
+    return Optional.empty();
+  }
+
+  /**
+   * The slip line from a meeting point: the strongest thin line of the pencil within
+   * {@link #SLIP_WINDOW_RAD} of the predicted direction (the theory's slip line of the same
+   * feature from about the same point when hinted, else the geometric guess), kept clear of the
+   * shocks already measured from that point, measured like a short shock, and kept only when its
+   * contrast stands {@link #SLIP_MIN_SNR} standard errors above the noise.
+   */
+  static Optional<WaveDetector.Found> slipLine(WaveDetector.Context ctx, SlipSearch s, List<WaveDetector.Found> found,
+      List<ExpectedWave> hints) {
+    double centre = s.guessRad();
+    for (ExpectedWave h : hints) {
+      if (h.kind() == WaveKind.SLIP_LINE && h.feature() == s.feature() && h.startPx().distanceTo(s.origin()) < HINT_ORIGIN_PX) {
+        centre = s.guessRad() + ImageAngles.wrap(h.directionRad() - s.guessRad());
+      }
+    }
+    double a0 = centre - SLIP_WINDOW_RAD;
+    double a1 = centre + SLIP_WINDOW_RAD;
+    for (WaveDetector.Found f : found) {
+      if (!f.kind().isShock() || f.origin().distanceTo(s.origin()) > HINT_ORIGIN_PX) {
+        continue;
+      }
+      LineFit.Result l = f.m().distortedFit();
+      double d = ImageAngles.direction(l.ux(), l.uy());
+      // the shock's direction pointing away from the meeting point
+      Point2 mid = new Point2(l.cx(), l.cy());
+      if (mid.minus(s.origin()).dot(ImageAngles.unit(d)) < 0) {
+        d += Math.PI;
+      }
+      double rel = ImageAngles.wrap(d - centre);
+      if (rel >= 0 && rel - SLIP_CLEAR_RAD < a1 - centre) {
+        a1 = centre + Math.max(0, rel - SLIP_CLEAR_RAD);
+      } else if (rel < 0 && rel + SLIP_CLEAR_RAD > a0 - centre) {
+        a0 = centre + Math.min(0, rel + SLIP_CLEAR_RAD);
+      }
+    }
+    if (a1 - a0 < Math.toRadians(2)) {
+      return Optional.empty();
+    }
+    double rMax = Math.hypot(ctx.full().width, ctx.full().height);
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), a0, a1, SHORT_SKIP_PX, rMax);
+    AngularScan.Hit h = scan.strongestLine(WaveDetector.MIN_CANDIDATE_SNR, Math.toRadians(3) / scan.step, false);
+    if (h == null) {
+      return Optional.empty();
+    }
+    int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(h.index())));
+    double a = scan.angle(h.index());
+    Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, Math.cos(a), -Math.sin(a), SHORT_SKIP_PX, scan.reach[i] - 2);
+    Optional<WaveDetector.Found> f = measureShort(ctx, c, WaveKind.SLIP_LINE, s.side(), s.feature(), s.origin());
+    double lo = a0;
+    double hi = a1;
+    double near = s.feature() == Feature.TRIPLE_POINT ? SLIP_TRIPLE_POINT_PX : SLIP_ORIGIN_PX;
+    return f.filter(x -> standsOut(ctx, x) && passesNear(x, s.origin(), near) && within(x, lo, hi));
+  }
+
+  /** Whether a measured line's contrast stands {@link #SLIP_MIN_SNR} standard errors above the frame noise. */
+  private static boolean standsOut(WaveDetector.Context ctx, WaveDetector.Found x) {
+    double se = ctx.noise() / Math.sqrt(Math.max(1, x.m().distortedFit().length() / Measure.NORMAL_STEP_PX));
+    return Math.abs(x.m().amplitude()) >= SLIP_MIN_SNR * se;
+  }
+
+  /** Whether a line from a meeting point passes within {@code tolPx} of it. */
+  private static boolean passesNear(WaveDetector.Found x, Point2 o, double tolPx) {
+    LineFit.Result l = x.m().distortedFit();
+    double d = Math.abs((o.x() - l.cx()) * l.uy() - (o.y() - l.cy()) * l.ux());
+    return d <= tolPx;
+  }
+
+  /** A slip line's fitted line passes this close to the meeting point of two measured shocks, px. */
+  static final double SLIP_ORIGIN_PX = 6;
+  /**
+   * The same for a triple point, which is known only as where the incident shock's fit ends: in
+   * shadowgraph that end lay 12 px from the rendered slip line (generator 14 deg, M 2).
+   */
+  static final double SLIP_TRIPLE_POINT_PX = 15;
+
+  private static boolean within(WaveDetector.Found x, double a0, double a1) {
+    LineFit.Result l = x.m().distortedFit();
+    double d = ImageAngles.direction(l.ux(), l.uy());
+    double mid = 0.5 * (a0 + a1);
+    double rel = ImageAngles.wrap(d - mid);
+    if (Math.abs(rel) > 0.5 * Math.PI) {
+      rel = ImageAngles.wrap(rel + Math.PI);
+    }
+    return Math.abs(rel) <= 0.5 * (a1 - a0) + Math.toRadians(1);
+  }
+
+  /**
+   * A double ramp's reflected wave: from where the ramp shocks meet, back towards the ramp, at
+   * least a Mach angle (taken as 20 degrees, below any supersonic Mach angle) from the flow behind
+   * the second shock. A weak shock is searched for; when the theory (hint) makes it an expansion
+   * it is not searched, since a weak fan from a point is not told from the slip line and merged
+   * shock beside it by the fan search.
+   */
+  static Optional<WaveDetector.Found> rampReflection(BodyShape.DoubleRamp r, List<WaveDetector.Found> found, WaveDetector.Context ctx,
+      List<ExpectedWave> hints) {
+    Point2 x = crossing(found, Feature.CORNER, Feature.SECOND_CORNER, ctx);
+    if (x == null) {
+      return Optional.empty();
+    }
+    Side s = r.wall().solidSide().opposite();
+    double flow2 = Search.wallDirection(r.wall(), ctx.flow()) + s.sign() * (r.deflectionRad() + r.secondDeflectionRad());
+    int g = -s.sign();
+    Search sr = Search.shock(x, flow2 + g * MIN_REFLECTED_ANGLE_RAD, flow2 + g * NEAR_NORMAL, WaveKind.REFLECTED_SHOCK, s.opposite(),
+        Feature.INTERSECTION);
+    for (ExpectedWave h : hints) {
+      boolean here = h.feature() == Feature.INTERSECTION && h.side() == s.opposite() && h.startPx().distanceTo(x) < HINT_ORIGIN_PX;
+      if (here && (h.kind() == WaveKind.EXPANSION_HEAD || h.kind() == WaveKind.EXPANSION_TAIL)) {
+        return Optional.empty();
+      }
+    }
+    return shortShock(ctx, WaveDetector.narrow(sr, hints));
+  }
+
+  /** A reflected wave leaves the flow behind the second shock at least this steeply. */
+  static final double MIN_REFLECTED_ANGLE_RAD = Math.toRadians(20);
 
   /** The end of a fitted segment nearer to {@code p}. */
   private static Point2 nearerEnd(LineFit.Result f, Point2 p) {
@@ -206,7 +394,9 @@ final class Secondary {
     double s1 = scan.reach[i] - 2;
     double a = scan.angle(h.index());
     Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, Math.cos(a), -Math.sin(a), SHORT_SKIP_PX, s1);
-    return measureShort(ctx, c, s.kind(), s.side(), s.feature(), s.origin());
+    // the accurate stage may slide onto a stronger line beside the sector (a Mach reflection's
+    // slip line in shadowgraph): what ends outside the sector is not the wave searched for
+    return measureShort(ctx, c, s.kind(), s.side(), s.feature(), s.origin()).filter(x -> within(x, s.a0(), s.a1()));
   }
 
   /**

@@ -90,7 +90,7 @@ public final class WaveDetector {
     if (req.shape() instanceof BodyShape.Freestream f) {
       found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
     }
-    found.addAll(Secondary.find(req.shape(), found, ctx));
+    found.addAll(Secondary.find(req.shape(), found, ctx, req.hints()));
     List<ObservedWave> out = new ArrayList<>();
     for (Found f : found) {
       out.add(f.toObserved(req.hints()));
@@ -141,7 +141,8 @@ public final class WaveDetector {
       Point2 start = c.plus(u.times(f.startAlong()));
       Point2 end = c.plus(u.times(f.endAlong()));
       double dir = ImageAngles.direction(f.ux(), f.uy());
-      double sigma = kind.isShock() || kind == WaveKind.MACH_WAVE ? Uncertainty.total(f) : Uncertainty.totalForFan(f);
+      double sigma = kind.isShock() || kind == WaveKind.MACH_WAVE || kind == WaveKind.SLIP_LINE ? Uncertainty.total(f)
+          : Uncertainty.totalForFan(f);
       FittedLine line = new FittedLine(c, dir, sigma, start, end, f.support(), f.rmsPx(), f.curved());
       return new ObservedWave(kind, Optional.of(side), line, m.amplitude(), m.widthPx(), Optional.of(feature));
     }
