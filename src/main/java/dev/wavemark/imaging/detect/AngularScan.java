@@ -1,7 +1,7 @@
 package dev.wavemark.imaging.detect;
 
 /**
- * The candidate stage: the mean of a reduced-resolution frame along each ray of a pencil from
+ * The candidate stage: the reduced-resolution frame summed along each ray of a pencil from
  * a point where waves start (a Hough transform restricted to the lines through one point, which
  * is what the model geometry allows). A wave through the point shows in this angular profile
  * with the same signature it has across its line: a peak, a step or a dark-bright pair.
@@ -13,17 +13,25 @@ final class AngularScan {
   final double oy;
   final double a0;
   final double step;
-  final double[] mean;
+  /**
+   * For each angle, the searched value: the ray's sum over the square root of its sample count
+   * (see {@link #of}), or in a {@link #levels()} scan its mean.
+   */
+  final double[] profile;
+  /** For each angle, the mean along the ray. */
+  private final double[] level;
   /** For each angle, the largest radius (frame px) at which the ray is still in the flow. */
   final double[] reach;
   final double rMin;
 
-  private AngularScan(double ox, double oy, double a0, double step, double[] mean, double[] reach, double rMin) {
+  private AngularScan(double ox, double oy, double a0, double step, double[] profile, double[] level, double[] reach,
+      double rMin) {
     this.ox = ox;
     this.oy = oy;
     this.a0 = a0;
     this.step = step;
-    this.mean = mean;
+    this.profile = profile;
+    this.level = level;
     this.reach = reach;
     this.rMin = rMin;
   }
@@ -40,21 +48,41 @@ final class AngularScan {
    * @param rMax last radius used, frame px
    */
   static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax) {
+    return of(low, ox, oy, a0, a1, rMin, rMax, null);
+  }
+
+  /**
+   * As {@link #of(Raster, double, double, double, double, double, double)}, each ray ending
+   * {@code stop[4]} px before the line through (stop[0], stop[1]) along (stop[2], stop[3])
+   * (frame px) where it meets that line ahead of the origin: another wave the searched one
+   * runs into. What lies beyond is left out of the profile as well as out of the reach, so that
+   * the wave beyond cannot win the search.
+   *
+   * <p>Each value of the profile is the sum along its ray over the square root of the number of
+   * samples, not the mean: with independent pixel noise every value then carries the same noise
+   * whatever the ray's length (the profile's noise estimate assumes that), and a short ray, e.g.
+   * one that runs into the model a few tens of pixels out and crosses another wave's foot on the
+   * way, no longer outweighs a long ray that lies on a wave for hundreds of pixels (a matched
+   * filter's rule: evidence grows with the length on the line, noise with its square root).
+   */
+  static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax,
+      double @org.jspecify.annotations.Nullable [] stop) {
     int k = low.scale;
     double rTyp = Math.max(rMin + 20, Math.min(rMax, 400));
     double step = Math.max(Math.toRadians(0.05), Math.min(Math.toRadians(0.5), 0.5 * k / rTyp));
     int n = (int) Math.ceil((a1 - a0) / step) + 1;
-    double[] mean = new double[n];
+    double[] value = new double[n];
+    double[] level = new double[n];
     double[] reach = new double[n];
     double off = 0.5 * (k - 1);
     double lx0 = (ox - off) / k;
     double ly0 = (oy - off) / k;
     double rs = rMin / k;
-    double re = rMax / k;
     for (int i = 0; i < n; i++) {
       double a = a0 + i * step;
       double ux = Math.cos(a);
       double uy = -Math.sin(a);
+      double re = (stop == null ? rMax : Math.min(rMax, distanceTo(ox, oy, ux, uy, stop))) / k;
       double sum = 0;
       int cnt = 0;
       double last = 0;
@@ -72,46 +100,46 @@ final class AngularScan {
         cnt++;
         last = r;
       }
-      mean[i] = cnt >= 8 ? sum / cnt : Double.NaN;
+      value[i] = cnt >= 8 ? sum / Math.sqrt(cnt) : Double.NaN;
+      level[i] = cnt >= 8 ? sum / cnt : Double.NaN;
       reach[i] = last * k;
     }
-    return new AngularScan(ox, oy, a0, step, mean, reach, rMin);
+    return new AngularScan(ox, oy, a0, step, value, level, reach, rMin);
   }
 
   /**
-   * Shortens every ray to end {@code margin} px before the line through (cx, cy) along (ux, uy)
-   * (frame px), where the ray meets it ahead of the origin.
+   * The same pencil searched on the mean along each ray: the level of a band that fills its rays
+   * (a fan: every ray through a centred fan's origin lies in it for its whole length), whose
+   * edges are where that level falls to half, whatever each ray's length.
    */
-  void clipAt(double cx, double cy, double ux, double uy, double margin) {
-    for (int i = 0; i < reach.length; i++) {
-      double a = angle(i);
-      double dx = Math.cos(a);
-      double dy = -Math.sin(a);
-      double det = dx * uy - dy * ux;
-      if (Math.abs(det) < 1e-9) {
-        continue;
-      }
-      double t = ((cx - ox) * uy - (cy - oy) * ux) / det;
-      if (t > 0) {
-        reach[i] = Math.max(0, Math.min(reach[i], t - margin));
-      }
+  AngularScan levels() {
+    return new AngularScan(ox, oy, a0, step, level, level, reach, rMin);
+  }
+
+  /** Distance along the ray (dx, dy) from (ox, oy) to {@code stop[4]} px short of the stop line; infinite if it never meets it. */
+  private static double distanceTo(double ox, double oy, double dx, double dy, double[] stop) {
+    double det = dx * stop[3] - dy * stop[2];
+    if (Math.abs(det) < 1e-9) {
+      return Double.POSITIVE_INFINITY;
     }
+    double t = ((stop[0] - ox) * stop[3] - (stop[1] - oy) * stop[2]) / det;
+    return t > 0 ? Math.max(0, t - stop[4]) : Double.POSITIVE_INFINITY;
   }
 
   /** Robust noise of the profile: the MAD of its first differences, over sqrt 2. */
   double noise() {
-    double[] d = new double[mean.length];
+    double[] d = new double[profile.length];
     int m = 0;
-    for (int i = 1; i < mean.length; i++) {
-      if (!Double.isNaN(mean[i]) && !Double.isNaN(mean[i - 1])) {
-        d[m++] = mean[i] - mean[i - 1];
+    for (int i = 1; i < profile.length; i++) {
+      if (!Double.isNaN(profile[i]) && !Double.isNaN(profile[i - 1])) {
+        d[m++] = profile[i] - profile[i - 1];
       }
     }
     return Math.max(1e-12, 1.4826 * LineFit.medianAbs(java.util.Arrays.copyOf(d, m)) / Math.sqrt(2));
   }
 
   private double at(int i) {
-    return i < 0 || i >= mean.length || Double.isNaN(mean[i]) ? 0 : mean[i];
+    return i < 0 || i >= profile.length || Double.isNaN(profile[i]) ? 0 : profile[i];
   }
 
   /** A found candidate direction (fractional index) with its strength and sign. */
@@ -160,9 +188,9 @@ final class AngularScan {
   /** Running-median half-width, in multiples of the widest line accepted. */
   static final double PLATEAU_WIDTHS = 3;
 
-  /** The profile minus its running median over 2w+1 angles (missing angles count as zero); w = 0 gives the profile. */
+  /** The profile minus its running median over 2w+1 angles (missing angles give zero); w = 0 gives the profile. */
   double[] withoutMedian(int w) {
-    int n = mean.length;
+    int n = profile.length;
     double[] q = new double[n];
     if (w == 0) {
       for (int i = 0; i < n; i++) {
@@ -170,16 +198,23 @@ final class AngularScan {
       }
       return q;
     }
+    // a missing ray (out of the flow, too short) is no evidence either way: it stays zero and is
+    // left out of its neighbours' medians, or a gap in a bright plateau would read as a dark line
     double[] win = new double[2 * w + 1];
     for (int i = 0; i < n; i++) {
+      if (Double.isNaN(profile[i])) {
+        continue;
+      }
       int lo = Math.max(0, i - w);
       int hi = Math.min(n - 1, i + w);
       int m = 0;
       for (int k = lo; k <= hi; k++) {
-        win[m++] = at(k);
+        if (!Double.isNaN(profile[k])) {
+          win[m++] = profile[k];
+        }
       }
       java.util.Arrays.sort(win, 0, m);
-      q[i] = at(i) - win[m / 2];
+      q[i] = profile[i] - win[m / 2];
     }
     return q;
   }
@@ -211,11 +246,11 @@ final class AngularScan {
     double best = 0;
     int bi = -1;
     int bj = -1;
-    for (int i = 1; i < mean.length - 1; i++) {
+    for (int i = 1; i < profile.length - 1; i++) {
       if (!(at(i) > at(i - 1) && at(i) >= at(i + 1) && at(i) > 0)) {
         continue;
       }
-      for (int j = Math.max(0, i - maxSepIndex); j <= Math.min(mean.length - 1, i + maxSepIndex); j++) {
+      for (int j = Math.max(0, i - maxSepIndex); j <= Math.min(profile.length - 1, i + maxSepIndex); j++) {
         double d = at(i) - at(j);
         if (at(j) < 0 && d > best && Math.min(at(i), -at(j)) > 0.25 * Math.max(at(i), -at(j))) {
           best = d;
@@ -239,7 +274,7 @@ final class AngularScan {
   }
 
   /**
-   * The widest band of one sign (schlieren fan): the run of angles whose |mean| stays above
+   * The widest band of one sign (schlieren fan): the run of angles whose |profile| stays above
    * half the run's median level; returns its two edges (head first in index order) or null.
    */
   Hit[] widestBand(double minSnr, double minWidthIndex) {
@@ -248,19 +283,19 @@ final class AngularScan {
     Hit[] best = null;
     double bestScore = 0;
     int i = 0;
-    while (i < mean.length) {
+    while (i < profile.length) {
       if (Math.abs(at(i)) < thr) {
         i++;
         continue;
       }
       int sign = at(i) > 0 ? 1 : -1;
       int j = i;
-      while (j + 1 < mean.length && sign * at(j + 1) >= thr) {
+      while (j + 1 < profile.length && sign * at(j + 1) >= thr) {
         j++;
       }
       int width = j - i + 1;
       // a band running into the end of the sector is a wave crossing the pencil, not a fan
-      boolean bounded = i > 0 && j < mean.length - 1;
+      boolean bounded = i > 0 && j < profile.length - 1;
       if (width >= minWidthIndex && bounded) {
         double[] vals = new double[width];
         for (int k = i; k <= j; k++) {
@@ -282,13 +317,13 @@ final class AngularScan {
     return best;
   }
 
-  /** Where sign*mean first falls below {@code half} walking from index {@code from} in direction {@code dir}. */
+  /** Where sign*profile first falls below {@code half} walking from index {@code from} in direction {@code dir}. */
   private double edge(int from, int dir, int sign, double half) {
     int k = from;
-    while (k + dir >= 0 && k + dir < mean.length && sign * at(k + dir) >= half) {
+    while (k + dir >= 0 && k + dir < profile.length && sign * at(k + dir) >= half) {
       k += dir;
     }
-    if (k + dir < 0 || k + dir >= mean.length) {
+    if (k + dir < 0 || k + dir >= profile.length) {
       return k;
     }
     double vi = sign * at(k);
@@ -301,11 +336,11 @@ final class AngularScan {
     double sigma = noise();
     Hit pos = null;
     Hit neg = null;
-    double[] q = new double[mean.length];
+    double[] q = new double[profile.length];
     for (int k = 0; k < q.length; k++) {
       q[k] = at(k);
     }
-    for (int i = 1; i < mean.length - 1; i++) {
+    for (int i = 1; i < profile.length - 1; i++) {
       double v = q[i];
       if (Math.abs(v) < minSnr * sigma || !isNarrow(q, i, maxWidthIndex)) {
         continue;

@@ -169,10 +169,9 @@ public final class WaveDetector {
    */
   static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
-    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax);
-    if (stop != null) {
-      scan.clipAt(stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX);
-    }
+    double[] clip = stop == null ? null
+        : new double[] {stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX};
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax, clip);
     double rTyp = 250;
     List<Found> out = new ArrayList<>();
     if (!s.fan()) {
@@ -191,7 +190,7 @@ public final class WaveDetector {
     }
     AngularScan.Hit[] edges = ctx.shadow()
         ? scan.oppositeLines(0.6 * MIN_CANDIDATE_SNR, (int) Math.ceil(12.0 / rTyp / scan.step), 10.0 / rTyp / scan.step)
-        : scan.widestBand(0.6 * MIN_CANDIDATE_SNR, 12.0 / rTyp / scan.step);
+        : scan.levels().widestBand(0.6 * MIN_CANDIDATE_SNR, 12.0 / rTyp / scan.step);
     if (edges == null) {
       return out;
     }

@@ -40,46 +40,92 @@ class DetectorBenchmark {
         new BodyShape.TwinGenerators(new Point2(100.5, 150.2), new Point2(100.5, 620.7), d8, d8));
   }
 
-  record Row(String kind, double errDeg, double sigmaDeg) {}
+  record Row(String kind, double errDeg, double sigmaDeg, String label, Case c) {}
+
+  /** Number of pictures of the accuracy table. */
+  static final int CASES = 63;
+
+  /** One picture of the accuracy table: everything needed to render it again. */
+  record Case(int index, BodyShape shape, Optics optics, int edge, double blur, double snr, double roll, double mach,
+      long seed) {
+    RenderedCase render() {
+      return RenderedCase.of(shape.contractName(), shape, mach, optics, edge, blur, snr, roll, 1024, 768, seed);
+    }
+
+    @Override
+    public String toString() {
+      return String.format("case %d: %s %s edge %+d blur %.2f px SNR %s roll %.2f deg M %.3f seed %d", index,
+          shape.contractName(), optics.contractName(), edge, blur, Double.isInfinite(snr) ? "clean" : String.valueOf(snr),
+          Math.toDegrees(roll), mach, seed);
+    }
+  }
+
+  /** Picture {@code i} of the accuracy table (its cycle of shapes, optics, blur, noise and roll). */
+  static Case caseOf(int i) {
+    List<BodyShape> shapes = shapes();
+    Optics[] optics = {Optics.SCHLIEREN_VERTICAL_EDGE, Optics.SCHLIEREN_HORIZONTAL_EDGE, Optics.SHADOWGRAPH};
+    double[] snrs = {Double.POSITIVE_INFINITY, 20, 10, 5};
+    BodyShape shape = shapes.get(i % shapes.size());
+    Optics o = optics[(i / shapes.size()) % 3];
+    int edge = (i / 27) % 2 == 0 ? 1 : -1;
+    double blur = 0.8 + 1.7 * ((i * 7) % 10) / 9.0;
+    double snr = snrs[(i * 3 + i / 9) % 4];
+    double roll = Math.toRadians(5.0 * ((i * 5) % 11) / 10.0) * (i % 2 == 0 ? 1 : -1);
+    double mach = 2.0 + 0.5 * ((i * 3) % 7) / 6.0;
+    return new Case(i, shape, o, edge, blur, snr, roll, mach, 100 + i);
+  }
+
+  static String fmtTruth(ExpectedWave t) {
+    return String.format("(dir %.2f deg, %.0f,%.0f -> %.0f,%.0f)", Math.toDegrees(t.directionRad()), t.startPx().x(),
+        t.startPx().y(), t.endPx().x(), t.endPx().y());
+  }
+
+  static String fmtLine(ObservedWave w) {
+    return String.format("(dir %.2f deg, %.0f,%.0f -> %.0f,%.0f)", Math.toDegrees(w.line().directionRad()),
+        w.line().startPx().x(), w.line().startPx().y(), w.line().endPx().x(), w.line().endPx().y());
+  }
 
   @Test
   void accuracy() {
     BoofConcurrency.setMaxThreads(1);
-    Optics[] optics = {Optics.SCHLIEREN_VERTICAL_EDGE, Optics.SCHLIEREN_HORIZONTAL_EDGE, Optics.SHADOWGRAPH};
-    double[] snrs = {Double.POSITIVE_INFINITY, 20, 10, 5};
-    List<BodyShape> shapes = shapes();
     List<Row> rows = new ArrayList<>();
     Map<String, int[]> miss = new TreeMap<>();
     int cases = 0;
     int failed = 0;
     int falseShocksHighSnr = 0;
     int missedShocksHighSnr = 0;
-    for (int i = 0; i < 63; i++) {
-      BodyShape shape = shapes.get(i % shapes.size());
-      Optics o = optics[(i / shapes.size()) % 3];
-      int edge = (i / 27) % 2 == 0 ? 1 : -1;
-      double blur = 0.8 + 1.7 * ((i * 7) % 10) / 9.0;
-      double snr = snrs[(i * 3 + i / 9) % 4];
-      double roll = Math.toRadians(5.0 * ((i * 5) % 11) / 10.0) * (i % 2 == 0 ? 1 : -1);
-      double mach = 2.0 + 0.5 * ((i * 3) % 7) / 6.0;
+    int opticsRight = 0;
+    for (int i = 0; i < CASES; i++) {
+      Case cs = caseOf(i);
+      BodyShape shape = cs.shape();
+      Optics o = cs.optics();
+      double snr = cs.snr();
+      double roll = cs.roll();
       RenderedCase c;
       try {
-        c = RenderedCase.of(shape.contractName(), shape, mach, o, edge, blur, snr, roll, 1024, 768, 100 + i);
+        c = cs.render();
       } catch (RuntimeException e) {
-        System.out.println("render failed " + shape.contractName() + ": " + e.getMessage());
+        System.out.println("render failed " + cs + ": " + e.getMessage());
         continue;
       }
       cases++;
+      Raster low = Raster.of(c.frame(), FlowRegion.of(c.mask())).eroded(WaveDetector.EDGE_MARGIN_PX).reduced(2);
+      boolean guessShadow = Frames.guessOptics(low) == Optics.SHADOWGRAPH;
+      if (guessShadow == (o == Optics.SHADOWGRAPH)) {
+        opticsRight++;
+      } else {
+        System.out.println("optics guessed wrong: " + cs);
+      }
       List<ObservedWave> found;
       try {
         found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), o, shape, roll));
       } catch (RuntimeException e) {
-        System.out.println("detect failed " + shape.contractName() + " " + o + ": " + e.getMessage());
+        System.out.println("detect failed " + cs + ": " + e.getMessage());
         failed++;
         found = List.of();
       }
       boolean[] used = new boolean[found.size()];
-      Map<String, Double> steps = densitySteps(shape, mach, roll);
+      Map<String, Double> steps = densitySteps(shape, cs.mach(), roll);
       for (ExpectedWave t : c.truth()) {
         String k = family(t.kind());
         double step = steps.getOrDefault(key(t), Double.NaN);
@@ -104,33 +150,45 @@ class DetectorBenchmark {
         m[0]++;
         if (best < 0) {
           m[1]++;
+          if (!k.equals("shock")) {
+            System.out.println("missed " + t.label() + " " + fmtTruth(t) + " in " + cs);
+          }
           if (k.equals("shock") && snr >= 10) {
             missedShocksHighSnr++;
-            System.out.printf("missed %s in %s %s snr %s (density step %.4f of the freestream's)%n", t.label(), shape.contractName(), o,
-                snr, step);
-          }
-          if (k.equals("slip-line")) {
-            System.out.printf("missed %s in %s %s snr %s (density step %.4f)%n", t.label(), shape.contractName(), o, snr, step);
+            System.out.println("missed " + t.label() + " " + fmtTruth(t) + " in " + cs);
           }
           continue;
         }
         used[best] = true;
         ObservedWave w = found.get(best);
         rows.add(new Row(k, Math.toDegrees(lineDiff(w.line().directionRad(), t.directionRad())),
-            Math.toDegrees(w.line().directionUncertaintyRad())));
+            Math.toDegrees(w.line().directionUncertaintyRad()), t.label(), cs));
       }
       for (int j = 0; j < found.size(); j++) {
         if (!used[j]) {
           String k = family(found.get(j).kind());
           miss.computeIfAbsent(k, x -> new int[3])[2]++;
+          if (!"shock".equals(k)) {
+            System.out.println("false " + found.get(j).kind() + " " + fmtLine(found.get(j)) + " in " + cs);
+          }
           if ("shock".equals(k) && snr >= 10) {
             falseShocksHighSnr++;
-            System.out.println("false " + found.get(j).kind() + " in " + shape.contractName() + " " + o + " snr " + snr);
+            System.out.println("false " + found.get(j).kind() + " " + fmtLine(found.get(j)) + " in " + cs);
           }
         }
       }
     }
     System.out.println("pictures " + cases + ", detection failures " + failed);
+    // every matched wave, for a look at the worst ones: target/detector-accuracy.csv
+    StringBuilder csv = new StringBuilder("family,wave,error_deg,sigma_deg,case\n");
+    for (Row r : rows) {
+      csv.append(String.format("%s,%s,%.5f,%.5f,%s%n", r.kind(), r.label(), r.errDeg(), r.sigmaDeg(), r.c()));
+    }
+    try {
+      java.nio.file.Files.writeString(java.nio.file.Path.of("target", "detector-accuracy.csv"), csv);
+    } catch (java.io.IOException e) {
+      System.out.println("could not write target/detector-accuracy.csv: " + e.getMessage());
+    }
     System.out.println("| family | truth waves | matched | median err (deg) | p90 err (deg) | missed | false | within 1 sigma |");
     for (var e : miss.entrySet()) {
       List<Double> errs = new ArrayList<>();
@@ -148,6 +206,7 @@ class DetectorBenchmark {
           e.getValue()[1], e.getValue()[2], n == 0 ? 0 : 100.0 * within / n);
     }
     System.out.println("missed shocks at SNR >= 10: " + missedShocksHighSnr + ", false shocks at SNR >= 10: " + falseShocksHighSnr);
+    System.out.println("optics guess (shadowgraph or schlieren) right on " + opticsRight + " of " + cases + " pictures");
   }
 
   /**
