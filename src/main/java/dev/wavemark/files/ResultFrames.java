@@ -103,7 +103,7 @@ public final class ResultFrames {
     if (m == null) {
       return new ResultFile.Wave(o.kind().contractName(), o.side().map(s -> s.contractName()).orElse(null),
           Math.toDegrees(ImageAngles.acuteToFlow(l.directionRad(), flowRad)), Math.toDegrees(l.directionUncertaintyRad()),
-          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null);
+          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null, bow(o));
     }
     ExpectedWave e = m.expected();
     Double deflection = null;
@@ -122,9 +122,15 @@ public final class ResultFrames {
         break;
       }
     }
-    return new ResultFile.Wave(e.kind().contractName(), e.side().contractName(), Math.toDegrees(m.measuredAngleRad()),
+    return new ResultFile.Wave(e.kind().contractName(), e.kind() == WaveKind.BOW_SHOCK ? null : e.side().contractName(),
+        Math.toDegrees(m.measuredAngleRad()),
         Math.toDegrees(m.measuredUncertaintyRad()), px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), e.label(),
-        l.curved(), deflection, Math.toDegrees(m.predictedAngleRad()), atNominal);
+        l.curved(), deflection, Math.toDegrees(m.predictedAngleRad()), atNominal, bow(o));
+  }
+
+  private static ResultFile.@Nullable BowJson bow(ObservedWave o) {
+    return o.bow().map(b -> new ResultFile.BowJson(b.standoffPx(), b.standoffSigmaPx(), b.standoffRatio(), b.vertexRadiusPx(),
+        b.vertexRadiusSigmaPx(), b.noseRadiusPx(), px(b.vertexPx()))).orElse(null);
   }
 
   private static List<ResultFile.PredictedWave> predictedWaves(List<ExpectedWave> ws) {
