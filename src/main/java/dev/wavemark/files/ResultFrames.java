@@ -147,8 +147,8 @@ public final class ResultFrames {
     for (BudgetLine b : lines) {
       boolean rad = "rad".equals(b.inputUnit());
       boolean systematic = switch (b.source()) {
-        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA -> true;
-        case ANGLE_FIT, SCATTER -> false;
+        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA, NOSE_RADIUS, CORRELATION -> true;
+        case ANGLE_FIT, SCATTER, STANDOFF -> false;
       };
       out.add(new ResultFile.BudgetItem(b.source().code(), b.description(),
           rad ? Math.toDegrees(b.inputUncertainty()) : b.inputUncertainty(), rad ? "deg" : b.inputUnit(), b.machContribution(),
