@@ -94,9 +94,10 @@ public record ResultFile(
    * @param vertexRadiusPx the shock's radius of curvature at the vertex
    * @param noseRadiusPx the nose radius from the run file (lens-corrected)
    * @param vertexPx where the shock crosses the stagnation line
+   * @param curvePx the fitted shock shape near the nose, sampled (lens-corrected px)
    */
   public record BowJson(double standoffPx, double standoffUncertaintyPx, double standoffNoseRadii, double vertexRadiusPx,
-      double vertexRadiusUncertaintyPx, double noseRadiusPx, double[] vertexPx) {}
+      double vertexRadiusUncertaintyPx, double noseRadiusPx, double[] vertexPx, double[][] curvePx) {}
 
   /**
    * The frame's Mach number and the estimates it combines. Extension: the consistency test

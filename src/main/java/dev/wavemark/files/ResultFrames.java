@@ -130,7 +130,8 @@ public final class ResultFrames {
 
   private static ResultFile.@Nullable BowJson bow(ObservedWave o) {
     return o.bow().map(b -> new ResultFile.BowJson(b.standoffPx(), b.standoffSigmaPx(), b.standoffRatio(), b.vertexRadiusPx(),
-        b.vertexRadiusSigmaPx(), b.noseRadiusPx(), px(b.vertexPx()))).orElse(null);
+        b.vertexRadiusSigmaPx(), b.noseRadiusPx(), px(b.vertexPx()),
+        b.curvePx().stream().map(ResultFrames::px).toArray(double[][]::new))).orElse(null);
   }
 
   private static List<ResultFile.PredictedWave> predictedWaves(List<ExpectedWave> ws) {

@@ -14,10 +14,15 @@ import dev.wavemark.core.geom.Point2;
  * @param vertexRadiusSigmaPx its standard uncertainty
  * @param noseRadiusPx the nose radius the stand-off is measured from (from the run file)
  * @param halfSpanPx the fit used shock points up to this distance either side of the stagnation line
+ * @param curvePx the fitted shape sampled across that span, for drawing
  */
 public record BowShockFit(
     Point2 vertexPx, double standoffPx, double standoffSigmaPx, double vertexRadiusPx, double vertexRadiusSigmaPx,
-    double noseRadiusPx, double halfSpanPx) {
+    double noseRadiusPx, double halfSpanPx, java.util.List<Point2> curvePx) {
+
+  public BowShockFit {
+    curvePx = java.util.List.copyOf(curvePx);
+  }
 
   /** The stand-off in nose radii, delta / R. */
   public double standoffRatio() {

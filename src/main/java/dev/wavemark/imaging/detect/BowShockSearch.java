@@ -127,7 +127,12 @@ final class BowShockSearch {
     double half = f.tMax;
     FittedLine line = new FittedLine(vertex, dir, sigmaDir, vertex.minus(tangent.times(half)), vertex.plus(tangent.times(half)),
         f.used, f.rms, false);
-    BowShockFit bow = new BowShockFit(vertex, standoff, sigmaStandoff, rc, sigmaRc, rIdeal, half);
+    List<Point2> curve = new ArrayList<>();
+    for (int k = 0; k <= CURVE_POINTS; k++) {
+      double t = -half + 2 * half * k / CURVE_POINTS;
+      curve.add(cIdeal.plus(up.times(f.at(t))).plus(across.times(t)));
+    }
+    BowShockFit bow = new BowShockFit(vertex, standoff, sigmaStandoff, rc, sigmaRc, rIdeal, half, curve);
     return Optional.of(new ObservedWave(WaveKind.BOW_SHOCK, Optional.empty(), line, median(amps), median(widths),
         Optional.of(Feature.BODY_NOSE), Optional.of(bow)));
   }
@@ -257,8 +262,16 @@ final class BowShockSearch {
     return new double[] {(l.centre() - m) * STEP_PX, Math.abs(l.amplitude()), l.width() * STEP_PX};
   }
 
+  /** Points of the fitted shape reported for drawing. */
+  static final int CURVE_POINTS = 24;
+
   /** The fitted shape near the vertex and its standard uncertainties. */
-  record Fit(double a, double b, double c, double sa, double sb, double sc, double rms, int used, double tMax) {}
+  record Fit(double a, double b, double c, double e, double sa, double sb, double sc, double rms, int used, double tMax) {
+    /** s at lateral distance t. */
+    double at(double t) {
+      return a + b * t + c * t * t + e * t * t * t * t;
+    }
+  }
 
   /** Robust fit of s = a + b t + c t^2 + e t^4 to points (t, s); null when it is singular. */
   static Fit fit(List<double[]> pts) {
@@ -339,7 +352,7 @@ final class BowShockSearch {
     // Weighted normal equations were built with the weights; the covariance of the estimate is
     // scale^2 (A^T W A)^-1 (weights of one for the points the biweight keeps in full).
     double s2 = scale * scale;
-    return new Fit(x.getEntry(0), x.getEntry(1) / tScale, x.getEntry(2) / (tScale * tScale),
+    return new Fit(x.getEntry(0), x.getEntry(1) / tScale, x.getEntry(2) / (tScale * tScale), x.getEntry(3) / Math.pow(tScale, 4),
         Math.sqrt(s2 * cov.getEntry(0, 0)), Math.sqrt(s2 * cov.getEntry(1, 1)) / tScale,
         Math.sqrt(s2 * cov.getEntry(2, 2)) / (tScale * tScale), rms, used, tMax);
   }
