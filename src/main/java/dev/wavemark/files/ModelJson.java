@@ -3,6 +3,7 @@ package dev.wavemark.files;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import dev.wavemark.core.Problem;
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.BowShock;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.BodyShape;
 import dev.wavemark.core.model.Side;
@@ -19,7 +20,25 @@ public record ModelJson(
     double @Nullable [] leadingEdgePx, @Nullable Double chordPx, @Nullable Double angleToleranceDeg,
     double @Nullable [][] wallPx, @Nullable String wallSide,
     double @Nullable [] secondCornerPx, @Nullable Double secondDeflectionDeg,
-    double @Nullable [][] leadingEdgesPx, double @Nullable [] deflectionsDeg) {
+    double @Nullable [][] leadingEdgesPx, double @Nullable [] deflectionsDeg,
+    double @Nullable [] centerPx, @Nullable Double noseRadiusPx, @Nullable Double noseRadiusTolerancePx) {
+
+  /** The fields of the sharp-edged shapes only (no blunt-body fields). */
+  public ModelJson(
+      @Nullable String shape, @Nullable Double deflectionDeg, @Nullable Double incidenceDeg,
+      double @Nullable [] leadingEdgePx, @Nullable Double chordPx, @Nullable Double angleToleranceDeg,
+      double @Nullable [][] wallPx, @Nullable String wallSide,
+      double @Nullable [] secondCornerPx, @Nullable Double secondDeflectionDeg,
+      double @Nullable [][] leadingEdgesPx, double @Nullable [] deflectionsDeg) {
+    this(shape, deflectionDeg, incidenceDeg, leadingEdgePx, chordPx, angleToleranceDeg, wallPx, wallSide, secondCornerPx,
+        secondDeflectionDeg, leadingEdgesPx, deflectionsDeg, null, null, null);
+  }
+
+  /** A blunt body's model object: {@code shape} is {@code cylinder} or {@code sphere}. */
+  public static ModelJson blunt(String shape, double[] centerPx, double noseRadiusPx, @Nullable Double noseRadiusTolerancePx) {
+    return new ModelJson(shape, null, null, null, null, null, null, null, null, null, null, null, centerPx, noseRadiusPx,
+        noseRadiusTolerancePx);
+  }
 
   /** Converts to the domain shape; {@code src} names the run file in messages. */
   public BodyShape toDomain(String src) {
@@ -59,6 +78,13 @@ public record ModelJson(
           }
           return new BodyShape.TwinGenerators(point(leadingEdgesPx[0], "leadingEdgesPx[0]", src),
               point(leadingEdgesPx[1], "leadingEdgesPx[1]", src), rad(deflectionsDeg[0]), rad(deflectionsDeg[1]));
+        }
+        case "cylinder":
+        case "sphere": {
+          double r = need(noseRadiusPx, "noseRadiusPx", src);
+          double sigma = noseRadiusTolerancePx != null ? noseRadiusTolerancePx : BodyShape.Blunt.DEFAULT_RADIUS_SIGMA * Math.abs(r);
+          return new BodyShape.Blunt("cylinder".equals(shape) ? BowShock.Nose.CYLINDER : BowShock.Nose.SPHERE,
+              point(centerPx, "centerPx", src), r, sigma);
         }
         case "none":
           return new BodyShape.Freestream(wallPx == null ? Optional.empty() : Optional.of(wall(src)));

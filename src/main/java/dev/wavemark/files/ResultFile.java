@@ -72,7 +72,17 @@ public record ResultFile(
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double deflectionDeg,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double theoryAngleDeg,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double nominalTheoryAngleDeg,
-      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable DirectionCheck check) {}
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable DirectionCheck check,
+      @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable BowJson bow) {
+
+    /** A wave without a direction check or a bow-shock measurement. */
+    public Wave(String kind, @Nullable String side, double angleDeg, double uncertaintyDeg, double[] startPx, double[] endPx,
+        int support, double rmsResidualPx, @Nullable String label, @Nullable Boolean curved, @Nullable Double deflectionDeg,
+        @Nullable Double theoryAngleDeg, @Nullable Double nominalTheoryAngleDeg) {
+      this(kind, side, angleDeg, uncertaintyDeg, startPx, endPx, support, rmsResidualPx, label, curved, deflectionDeg,
+          theoryAngleDeg, nominalTheoryAngleDeg, null, null);
+    }
+  }
 
   /**
    * Extension: a measured direction against theory's, both counter-clockwise on screen from the
@@ -82,6 +92,23 @@ public record ResultFile(
   public record DirectionCheck(
       double measuredDirectionDeg, double theoryDirectionDeg, double differenceDeg,
       @JsonInclude(JsonInclude.Include.NON_NULL) @Nullable Double differenceSigma) {}
+
+  /**
+   * Extension: a bow shock's measurement near its vertex. For a bow shock the wave's
+   * {@code startPx}-{@code endPx} is its tangent at the vertex and {@code angleDeg} that
+   * tangent's angle to the flow (90 for a shock square to the stagnation line).
+   *
+   * @param standoffPx the shock's distance ahead of the nose on the stagnation line
+   * @param standoffUncertaintyPx its standard uncertainty (the fit's, with the detector's floor)
+   * @param standoffNoseRadii standoffPx over noseRadiusPx (the nose radius's own uncertainty is
+   *     a line of the Mach budget, not part of this)
+   * @param vertexRadiusPx the shock's radius of curvature at the vertex
+   * @param noseRadiusPx the nose radius from the run file (lens-corrected)
+   * @param vertexPx where the shock crosses the stagnation line
+   * @param curvePx the fitted shock shape near the nose, sampled (lens-corrected px)
+   */
+  public record BowJson(double standoffPx, double standoffUncertaintyPx, double standoffNoseRadii, double vertexRadiusPx,
+      double vertexRadiusUncertaintyPx, double noseRadiusPx, double[] vertexPx, double[][] curvePx) {}
 
   /**
    * The frame's Mach number and the estimates it combines. Extension: the consistency test

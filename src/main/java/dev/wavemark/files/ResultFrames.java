@@ -104,7 +104,7 @@ public final class ResultFrames {
     if (m == null) {
       return new ResultFile.Wave(o.kind().contractName(), o.side().map(s -> s.contractName()).orElse(null),
           Math.toDegrees(ImageAngles.acuteToFlow(l.directionRad(), flowRad)), Math.toDegrees(l.directionUncertaintyRad()),
-          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null, null);
+          px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), null, l.curved(), null, null, null, null, bow(o));
     }
     ExpectedWave e = m.expected();
     Double deflection = null;
@@ -123,15 +123,22 @@ public final class ResultFrames {
         break;
       }
     }
-    return new ResultFile.Wave(e.kind().contractName(), e.side().contractName(), Math.toDegrees(m.measuredAngleRad()),
+    return new ResultFile.Wave(e.kind().contractName(), e.kind() == WaveKind.BOW_SHOCK ? null : e.side().contractName(),
+        Math.toDegrees(m.measuredAngleRad()),
         Math.toDegrees(m.measuredUncertaintyRad()), px(l.startPx()), px(l.endPx()), l.support(), l.rmsResidualPx(), e.label(),
         l.curved(), deflection, Math.toDegrees(m.predictedAngleRad()), atNominal,
-        DirectionCheck.of(o, m, flowRad).map(ResultFrames::check).orElse(null));
+        DirectionCheck.of(o, m, flowRad).map(ResultFrames::check).orElse(null), bow(o));
   }
 
   private static ResultFile.DirectionCheck check(DirectionCheck c) {
     return new ResultFile.DirectionCheck(Math.toDegrees(c.measuredRad()), Math.toDegrees(c.predictedRad()),
         Math.toDegrees(c.differenceRad()), Double.isFinite(c.differenceSigma()) ? c.differenceSigma() : null);
+  }
+
+  private static ResultFile.@Nullable BowJson bow(ObservedWave o) {
+    return o.bow().map(b -> new ResultFile.BowJson(b.standoffPx(), b.standoffSigmaPx(), b.standoffRatio(), b.vertexRadiusPx(),
+        b.vertexRadiusSigmaPx(), b.noseRadiusPx(), px(b.vertexPx()),
+        b.curvePx().stream().map(ResultFrames::px).toArray(double[][]::new))).orElse(null);
   }
 
   private static List<ResultFile.PredictedWave> predictedWaves(List<ExpectedWave> ws) {
@@ -148,8 +155,8 @@ public final class ResultFrames {
     for (BudgetLine b : lines) {
       boolean rad = "rad".equals(b.inputUnit());
       boolean systematic = switch (b.source()) {
-        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA -> true;
-        case ANGLE_FIT, SCATTER -> false;
+        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA, NOSE_RADIUS, CORRELATION -> true;
+        case ANGLE_FIT, SCATTER, STANDOFF -> false;
       };
       out.add(new ResultFile.BudgetItem(b.source().code(), b.description(),
           rad ? Math.toDegrees(b.inputUncertainty()) : b.inputUncertainty(), rad ? "deg" : b.inputUnit(), b.machContribution(),

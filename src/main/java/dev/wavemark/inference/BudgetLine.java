@@ -10,7 +10,7 @@ package dev.wavemark.inference;
  * @param inputUncertainty the input's standard uncertainty, in {@code inputUnit}; for
  *     {@link Source#ANGLE_FIT} the root-mean-square over the waves used, for
  *     {@link Source#SCATTER} the Birge ratio
- * @param inputUnit {@code rad}, {@code 1} (gamma, a ratio) or {@code Birge ratio}
+ * @param inputUnit {@code rad}, {@code 1} (gamma, a ratio), {@code px} or {@code Birge ratio}
  * @param machContribution the standard uncertainty it gives the Mach number, zero or positive
  */
 public record BudgetLine(
@@ -31,7 +31,13 @@ public record BudgetLine(
      * 1 the uncertainty is scaled by R (Particle Data Group practice), and this line holds the
      * added part, u sqrt(R^2 - 1). For a run summary: the frame-to-frame scatter.
      */
-    SCATTER("scatter");
+    SCATTER("scatter"),
+    /** A bow shock's measured stand-off (independent between frames), px. */
+    STANDOFF("standoff"),
+    /** The blunt nose's radius, from the run's stated tolerance (common to every frame), px. */
+    NOSE_RADIUS("nose-radius"),
+    /** The stand-off correlation's own scatter about the data it was fitted to, relative. */
+    CORRELATION("correlation");
 
     private final String code;
 

@@ -234,7 +234,12 @@ final class Combiner {
   private static List<BudgetLine> budget(List<Linear.Input> inputs, double[] g, double[] s, Describer d) {
     List<BudgetLine> lines = new ArrayList<>();
     for (BudgetLine.Source src : List.of(BudgetLine.Source.ANGLE_FIT, BudgetLine.Source.FLOW_DIRECTION,
-        BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA)) {
+        BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA, BudgetLine.Source.STANDOFF, BudgetLine.Source.NOSE_RADIUS,
+        BudgetLine.Source.CORRELATION)) {
+      boolean bowOnly = src == BudgetLine.Source.STANDOFF || src == BudgetLine.Source.NOSE_RADIUS || src == BudgetLine.Source.CORRELATION;
+      if (bowOnly && inputs.stream().noneMatch(in -> in.source() == src)) {
+        continue; // the blunt-body lines appear only when a bow shock gave an estimate
+      }
       double sumSq = 0;
       double sumIn = 0;
       int count = 0;

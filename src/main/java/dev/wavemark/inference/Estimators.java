@@ -77,6 +77,8 @@ final class Estimators {
       try {
         if (e.kind() == WaveKind.MACH_WAVE && freestream(e)) {
           families.computeIfAbsent(0, k -> new ArrayList<>()).add(p.observed());
+        } else if (e.kind() == WaveKind.BOW_SHOCK && shape instanceof BodyShape.Blunt b && observed.get(p.observed()).bow().isPresent()) {
+          out.add(bowShock(key, b, p.observed()));
         } else if (!informative(e.kind())) {
           continue;
         } else if (e.kind() == WaveKind.OBLIQUE_SHOCK && freestream(e)) {
@@ -106,7 +108,10 @@ final class Estimators {
     return new Built(out, warnings);
   }
 
-  /** Kinds whose angle carries the Mach number; slip lines, stems and bow shocks are checks only. */
+  /**
+   * Kinds whose angle carries the Mach number; slip lines, stems and bow shocks are checks only
+   * (a bow shock's Mach number comes from its stand-off, {@link #bowShock}, not its angle).
+   */
   static boolean informative(WaveKind k) {
     return switch (k) {
       case OBLIQUE_SHOCK, CONICAL_SHOCK, EXPANSION_HEAD, EXPANSION_TAIL, MACH_WAVE, REFLECTED_SHOCK, TRANSMITTED_SHOCK -> true;
@@ -203,6 +208,29 @@ final class Estimators {
     Map<Linear.Input, Double> sens = differentiate(f, inputs, STEP);
     return new Linear("mach-wave family (" + family.size() + ")", MachEstimate.Method.MACH_ANGLE, WaveKind.MACH_WAVE,
         Optional.empty(), family, m, sens);
+  }
+
+  /**
+   * A blunt body's bow shock: the Mach number from the measured stand-off over the nose radius
+   * through the inverse of Billig's correlation (core.gas.BowShock). Inputs: the stand-off fit
+   * (the shock's position on the stagnation line, measured from the nose centre, is what the
+   * picture gives, so a larger nose radius means a smaller stand-off), the nose radius's stated
+   * tolerance and the correlation's own scatter (relative, on delta/R). The correlation is for
+   * air and does not depend on gamma within the band it accepts, so gamma is no input.
+   */
+  private Linear bowShock(WaveKey key, BodyShape.Blunt b, int obs) {
+    dev.wavemark.core.model.BowShockFit fit = observed.get(obs).bow().orElseThrow();
+    double shockFromCentre = fit.standoffPx() + fit.noseRadiusPx();
+    ToDoubleFunction<Map<Linear.Input, Double>> f = off -> {
+      double r = fit.noseRadiusPx() + off.getOrDefault(Linear.Input.NOSE_RADIUS, 0.0);
+      double delta = shockFromCentre + off.getOrDefault(Linear.Input.standoff(obs), 0.0) - r;
+      double ratio = delta / r * (1 + off.getOrDefault(Linear.Input.CORRELATION, 0.0));
+      return dev.wavemark.core.gas.BowShock.machFromStandoff(b.nose(), ratio, gamma);
+    };
+    List<Linear.Input> inputs = List.of(Linear.Input.standoff(obs), Linear.Input.NOSE_RADIUS, Linear.Input.CORRELATION);
+    double m = f.applyAsDouble(Map.of());
+    return new Linear(key.label(), MachEstimate.Method.BOW_SHOCK_STANDOFF, WaveKind.BOW_SHOCK, Optional.empty(), List.of(obs), m,
+        differentiate(f, inputs, STEP));
   }
 
   private Linear closedForm(WaveKey key, MachEstimate.Method method, List<Integer> obs, List<Linear.Input> model,

@@ -21,9 +21,14 @@ public sealed interface Finding {
    * @param maxDeflectionRad thetaMax at {@code mach} (plane or conical, as the body is)
    * @param mach the Mach number judged at
    * @param machBasis {@code inferred} or {@code nominal}
+   * @param bowShock what was measured of the bow shock, e.g. its stand-off; empty when none was
    */
-  record Detached(String surface, double deflectionRad, double maxDeflectionRad, double mach, String machBasis)
+  record Detached(String surface, double deflectionRad, double maxDeflectionRad, double mach, String machBasis, String bowShock)
       implements Finding {
+    Detached(String surface, double deflectionRad, double maxDeflectionRad, double mach, String machBasis) {
+      this(surface, deflectionRad, maxDeflectionRad, mach, machBasis, "");
+    }
+
     @Override
     public Warning.Code warningCode() {
       return Warning.Code.DETACHED_SHOCK;
@@ -32,8 +37,9 @@ public sealed interface Finding {
     @Override
     public String message() {
       return String.format(java.util.Locale.ROOT,
-          "%s: deflection %.2f° exceeds the maximum %.2f° for an attached shock at the %s M = %.3f; the shock detaches",
-          surface, Math.toDegrees(deflectionRad), Math.toDegrees(maxDeflectionRad), machBasis, mach);
+          "%s: deflection %.2f° exceeds the maximum %.2f° for an attached shock at the %s M = %.3f; the shock detaches%s",
+          surface, Math.toDegrees(deflectionRad), Math.toDegrees(maxDeflectionRad), machBasis, mach,
+          bowShock.isEmpty() ? "" : "; " + bowShock);
     }
   }
 

@@ -1,6 +1,7 @@
 package dev.wavemark.inference;
 
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.core.gas.BowShock;
 import dev.wavemark.core.gas.ConicalFlow;
 import dev.wavemark.core.gas.ObliqueShock;
 import dev.wavemark.core.gas.ShockBranch;
@@ -188,6 +189,9 @@ final class FrameAnalysis {
       case MODEL_ANGLE -> run.modelAngleToleranceRad();
       case GAMMA -> options.gammaUncertainty();
       case SCATTER -> 0;
+      case STANDOFF -> observed.get(in.index()).bow().map(b -> b.standoffSigmaPx()).orElse(0.0);
+      case NOSE_RADIUS -> run.model() instanceof BodyShape.Blunt b ? b.noseRadiusSigmaPx() : 0;
+      case CORRELATION -> BowShock.STANDOFF_SCATTER;
     };
   }
 
@@ -201,6 +205,12 @@ final class FrameAnalysis {
             ModelAngles.names(run.model()).isEmpty() ? "no model angle" : String.join(", ", ModelAngles.names(run.model())));
         case GAMMA -> String.format(Locale.ROOT, "gamma %.4f ± %.4f (assumed)", gamma, options.gammaUncertainty());
         case SCATTER -> "scatter";
+        case STANDOFF -> String.format(Locale.ROOT, "bow-shock stand-off fit of %d wave(s), rms %.3f px", count, in);
+        case NOSE_RADIUS -> String.format(Locale.ROOT, "nose radius ± %.3f px (%s)", in,
+            run.model() instanceof BodyShape.Blunt b && b.noseRadiusSigmaPx() == BodyShape.Blunt.DEFAULT_RADIUS_SIGMA * b.noseRadiusPx()
+                ? "default, 1 % of the radius" : "run file");
+        case CORRELATION -> String.format(Locale.ROOT,
+            "Billig stand-off correlation ± %.0f %% of delta/R (assumed scatter, not a published figure)", 100 * in);
       };
     }
 
@@ -210,6 +220,8 @@ final class FrameAnalysis {
         case ANGLE_FIT, FLOW_DIRECTION, MODEL_ANGLE -> "rad";
         case GAMMA -> "1";
         case SCATTER -> "Birge ratio";
+        case STANDOFF, NOSE_RADIUS -> "px";
+        case CORRELATION -> "1";
       };
     }
   }
@@ -273,6 +285,20 @@ final class FrameAnalysis {
   private List<Finding> findings(Optional<Double> mach, String basis, List<Matcher.Pair> pairs, List<ExpectedWave> reference) {
     List<Finding> out = new ArrayList<>();
     mach.ifPresent(m -> out.addAll(detached(run.model(), m, basis, gamma)));
+    if (run.model() instanceof BodyShape.Blunt b && mach.isPresent()) {
+      for (int i = 0; i < observed.size(); i++) {
+        var bow = observed.get(i).bow();
+        if (bow.isPresent()) {
+          // a blunt nose turns its stagnation streamline square to the flow: always beyond thetaMax
+          double m = mach.get();
+          double max = b.nose() == BowShock.Nose.SPHERE ? ConicalFlow.of(gamma).maxConeAngle(m).coneRad()
+              : ObliqueShock.maxDeflection(m, gamma);
+          out.add(new Finding.Detached(b.contractName() + " nose", 0.5 * Math.PI, max, m, basis, String.format(Locale.ROOT,
+              "bow shock measured (wave #%d): stand-off %.2f ± %.2f px = %.3f nose radii, vertex radius of curvature %.1f px",
+              i, bow.get().standoffPx(), bow.get().standoffSigmaPx(), bow.get().standoffRatio(), bow.get().vertexRadiusPx())));
+        }
+      }
+    }
     for (int i = 0; i < observed.size(); i++) {
       if (observed.get(i).line().curved()) {
         int idx = i;

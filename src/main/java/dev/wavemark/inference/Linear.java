@@ -23,6 +23,13 @@ record Linear(
       return new Input(BudgetLine.Source.ANGLE_FIT, observedIndex);
     }
 
+    static final Input NOSE_RADIUS = new Input(BudgetLine.Source.NOSE_RADIUS, 0);
+    static final Input CORRELATION = new Input(BudgetLine.Source.CORRELATION, 0);
+
+    static Input standoff(int observedIndex) {
+      return new Input(BudgetLine.Source.STANDOFF, observedIndex);
+    }
+
     static Input model(int k) {
       return new Input(BudgetLine.Source.MODEL_ANGLE, k);
     }

@@ -42,7 +42,9 @@ public record MachEstimate(
     /** Two-shock theory of a regular reflection at a wall. */
     SHOCK_REFLECTION("shock reflection"),
     /** Shock-shock intersection theory (crossing shocks, merged and transmitted shocks). */
-    SHOCK_INTERSECTION("shock intersection");
+    SHOCK_INTERSECTION("shock intersection"),
+    /** A bow shock's stand-off ahead of a blunt nose, Billig's empirical correlation (core.gas.BowShock). */
+    BOW_SHOCK_STANDOFF("Billig stand-off");
 
     private final String label;
 

@@ -34,7 +34,8 @@ final class RunSummaries {
     for (int i = 0; i < n; i++) {
       FrameInference f = with.get(i);
       m[i] = f.mach().get().value();
-      own[i] = Math.hypot(part(f, BudgetLine.Source.ANGLE_FIT), part(f, BudgetLine.Source.SCATTER));
+      own[i] = Math.hypot(Math.hypot(part(f, BudgetLine.Source.ANGLE_FIT), part(f, BudgetLine.Source.SCATTER)),
+          part(f, BudgetLine.Source.STANDOFF));
     }
     double[] w = new double[n];
     boolean anyZero = false;
@@ -70,13 +71,18 @@ final class RunSummaries {
     double standardError = n > 1 ? scatter / Math.sqrt(n) : 0;
     List<BudgetLine> budget = new ArrayList<>();
     budget.add(new BudgetLine(BudgetLine.Source.ANGLE_FIT,
-        "angle fit and within-frame scatter, averaged over " + n + " frame(s)", rms(with, BudgetLine.Source.ANGLE_FIT), "rad", fit));
+        (line(with.get(0), BudgetLine.Source.STANDOFF).isPresent() ? "angle fit, stand-off fit" : "angle fit")
+            + " and within-frame scatter, averaged over " + n + " frame(s)", rms(with, BudgetLine.Source.ANGLE_FIT), "rad", fit));
     if (standardError > fit) {
       budget.add(new BudgetLine(BudgetLine.Source.SCATTER,
           String.format(Locale.ROOT, "frame-to-frame scatter %.5f over %d frames beyond the fit uncertainty", scatter, n),
           scatter, "1", Math.sqrt(standardError * standardError - fit * fit)));
     }
-    for (BudgetLine.Source s : List.of(BudgetLine.Source.FLOW_DIRECTION, BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA)) {
+    for (BudgetLine.Source s : List.of(BudgetLine.Source.FLOW_DIRECTION, BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA,
+        BudgetLine.Source.NOSE_RADIUS, BudgetLine.Source.CORRELATION)) {
+      if ((s == BudgetLine.Source.NOSE_RADIUS || s == BudgetLine.Source.CORRELATION) && line(with.get(0), s).isEmpty()) {
+        continue; // blunt-body lines only for a blunt body's bow shock
+      }
       double c = 0;
       for (int i = 0; i < n; i++) {
         c += w[i] * part(with.get(i), s);

@@ -40,6 +40,8 @@ record WaveKey(WaveKind kind, Side side, Feature feature, int ordinal) {
 
   /** The estimate label, e.g. {@code oblique-shock upper leading-edge}. */
   String label() {
-    return kind.contractName() + " " + side.contractName() + " " + feature.contractName() + (ordinal > 0 ? " #" + (ordinal + 1) : "");
+    // a bow shock spans both sides of its stagnation line; its pattern side is nominal
+    String sideName = kind == WaveKind.BOW_SHOCK ? "" : side.contractName() + " ";
+    return kind.contractName() + " " + sideName + feature.contractName() + (ordinal > 0 ? " #" + (ordinal + 1) : "");
   }
 }

@@ -73,7 +73,9 @@ final class Annotator {
       for (int i = 0; i < frame.waves().size(); i++) {
         ResultFile.Wave wave = frame.waves().get(i);
         Line2D.Double l = line(toPicture.apply(pt(wave.startPx())), toPicture.apply(pt(wave.endPx())), s);
-        stroke(g, curve(wave.startPx(), wave.endPx(), s, toPicture), MEASURED, new BasicStroke(1.3f * w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND), w);
+        java.awt.Shape drawn = wave.bow() != null && wave.bow().curvePx() != null && wave.bow().curvePx().length > 1
+            ? polyline(wave.bow().curvePx(), s, toPicture) : curve(wave.startPx(), wave.endPx(), s, toPicture);
+        stroke(g, drawn, MEASURED, new BasicStroke(1.3f * w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND), w);
         tag(g, "W" + (i + 1), l, img.getWidth(), img.getHeight());
       }
     } finally {
@@ -108,6 +110,20 @@ final class Annotator {
     for (int i = 0; i <= CURVE_POINTS; i++) {
       double t = (double) i / CURVE_POINTS;
       Point2 q = toPicture.apply(new Point2(a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])));
+      if (i == 0) {
+        p.moveTo(q.x() * s, q.y() * s);
+      } else {
+        p.lineTo(q.x() * s, q.y() * s);
+      }
+    }
+    return p;
+  }
+
+  /** A bow shock's fitted shape: its sampled points (lens-corrected) as they lie in the picture. */
+  private static Path2D.Double polyline(double[][] pts, double s, UnaryOperator<Point2> toPicture) {
+    Path2D.Double p = new Path2D.Double();
+    for (int i = 0; i < pts.length; i++) {
+      Point2 q = toPicture.apply(pt(pts[i]));
       if (i == 0) {
         p.moveTo(q.x() * s, q.y() * s);
       } else {

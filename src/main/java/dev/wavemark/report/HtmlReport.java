@@ -145,7 +145,10 @@ final class HtmlReport {
       ResultFile.Wave w = f.waves().get(i);
       ResultFile.Estimate e = Tables.estimateFor(f, i);
       waves.add(new ReportPage.WaveRow("W" + (i + 1), w.kind(), w.side() == null ? Fmt.UNKNOWN : w.side(),
-          w.label() == null ? Fmt.UNKNOWN : w.label(), Fmt.pm(w.angleDeg(), w.uncertaintyDeg(), 3),
+          (w.label() == null ? Fmt.UNKNOWN : w.label()) + (w.bow() == null ? "" : String.format(java.util.Locale.ROOT,
+              " (stand-off %.2f ± %.2f px = %.4f nose radii; vertex radius %.1f px)", w.bow().standoffPx(),
+              w.bow().standoffUncertaintyPx(), w.bow().standoffNoseRadii(), w.bow().vertexRadiusPx())),
+          Fmt.pm(w.angleDeg(), w.uncertaintyDeg(), 3),
           Fmt.fixed(w.theoryAngleDeg(), 3), Fmt.fixed(w.nominalTheoryAngleDeg(), 3), Fmt.fixed(w.deflectionDeg(), 2),
           e == null ? Fmt.UNKNOWN : Fmt.pm(e.value(), e.uncertainty(), 4), Integer.toString(w.support()),
           Fmt.fixed(w.rmsResidualPx(), 2), Boolean.TRUE.equals(w.curved())));
@@ -172,6 +175,11 @@ final class HtmlReport {
         consistency = f.mach().consistent()
             ? "The estimates agree within their uncertainties."
             : "The estimates disagree beyond their uncertainties; see the warnings.";
+      }
+      if (f.mach().estimates().stream().anyMatch(e -> "Billig stand-off".equals(e.method()))) {
+        consistency = (consistency == null ? "" : consistency + " ")
+            + "The bow-shock estimate comes from the stand-off through Billig's empirical correlation: far less precise than "
+            + "an oblique shock's, it enters the weighted mean with its own uncertainty (most of it the correlation's assumed scatter).";
       }
     }
     List<ReportPage.BudgetRow> budget = new ArrayList<>();

@@ -63,6 +63,12 @@ final class ModelOutline {
       out.add(List.of(t.lowerLeadingEdgePx(), at(t.lowerLeadingEdgePx(), flowRad + t.lowerDeflectionRad(), 0.25 * reach)));
     } else if (shape instanceof BodyShape.Freestream f) {
       f.wall().ifPresent(w -> out.add(wallLine(w, reach)));
+    } else if (shape instanceof BodyShape.Blunt b) {
+      List<Point2> circle = new ArrayList<>();
+      for (int i = 0; i <= 72; i++) {
+        circle.add(b.centrePx().plus(ImageAngles.unit(2 * Math.PI * i / 72).times(b.noseRadiusPx())));
+      }
+      out.add(circle);
     }
     return out;
   }

@@ -24,7 +24,7 @@ class ResultFileTest {
   private static ResultFile sample(double uncertainty) {
     double beta = Math.toDegrees(ObliqueShock.beta(2.0, Math.toRadians(10), ShockBranch.WEAK, 1.4));
     ResultFile.Wave w = new ResultFile.Wave("oblique-shock", "upper", beta, 0.04, new double[] {212, 384}, new double[] {700, 0},
-        812, 0.31, "upper leading-edge shock", false, 10.0, beta, null, null);
+        812, 0.31, "upper leading-edge shock", false, 10.0, beta, null, null, null);
     ResultFile.Mach m = new ResultFile.Mach(2.0, uncertainty,
         List.of(new ResultFile.Estimate("oblique-shock upper", 2.0, 0.008, null, null, null)), null, null, null);
     ResultFile.Frame ok = new ResultFile.Frame(0, "frame-0001.png", List.of(w), m,

@@ -36,7 +36,7 @@ final class Fixtures {
     double a = Math.toRadians(angleDeg);
     double[] end = {LEADING_EDGE[0] + lengthPx * Math.cos(a), LEADING_EDGE[1] - sign * lengthPx * Math.sin(a)};
     return new ResultFile.Wave("oblique-shock", side, angleDeg, uDeg, LEADING_EDGE.clone(), end, 400, 0.3,
-        side + " leading-edge shock", false, WEDGE_DEG, betaDeg(MACH), betaDeg(MACH), null);
+        side + " leading-edge shock", false, WEDGE_DEG, betaDeg(MACH), betaDeg(MACH), null, null);
   }
 
   /** An analysed frame whose two shocks both stand at the M = {@code mach} angle. */

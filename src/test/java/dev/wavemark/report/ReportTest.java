@@ -53,7 +53,7 @@ class ReportTest {
     double theory = Math.toDegrees(slip.directionRad());
     ResultFile.Wave w = new ResultFile.Wave("slip-line", "upper", 0.4, 0.05, new double[] {slip.startPx().x(), slip.startPx().y()},
         new double[] {slip.endPx().x(), slip.endPx().y()}, 300, 0.2, slip.label(), false, null, 0.0, 0.0,
-        new ResultFile.DirectionCheck(theory + 0.4, theory, 0.4, 8.0));
+        new ResultFile.DirectionCheck(theory + 0.4, theory, 0.4, 8.0), null);
     ResultFile.Frame f0 = Fixtures.frame(0, Fixtures.MACH, "frame-0001.png");
     List<ResultFile.Wave> waves = new java.util.ArrayList<>(f0.waves());
     waves.add(w);

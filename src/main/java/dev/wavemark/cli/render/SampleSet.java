@@ -95,6 +95,9 @@ final class SampleSet {
     e.add(entry("run-2755-ramp-shadowgraph", ".png", 2755, 2.2,
         model("ramp", 12.0, null, p(290, 335), null, wallAt(335), null, null, null, null), "shadowgraph", cal, false, null, W, H,
         "TB-2 run 2755: 12 deg compression ramp R12 on the floor plate, M2.2, direct shadowgraph"));
+    e.add(entry("run-2760-cylinder-m30", ".png", 2760, 3.0, ModelJson.blunt("cylinder", p(330, 240), 40.0 * S, 0.2),
+        "schlieren-vertical-edge", cal, false, null, W, H,
+        "TB-2 run 2760: 17.6 mm circular cylinder CY18 across the test section, seen end-on, M3.0, vertical knife edge"));
     e.add(entry("run-2770-wedge-sequence", ".tif", 2770, 2.5, model("wedge", 10.0, 0.0, new double[] {45, 73}, 40.0, null, null, null, null, null),
         "schlieren-vertical-edge", "../../calibration/bench-roi.json", true,
         new SceneFile.SequenceJson(50, -0.0004, 0.003, 0.15), 192, 144,

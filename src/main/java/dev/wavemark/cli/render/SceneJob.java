@@ -154,6 +154,10 @@ final class SceneJob {
     if (e instanceof WavePattern.Slip sl) {
       return new double[] {sl.left().mach(), sl.right().mach(), sl.left().density(), sl.right().density()};
     }
+    if (e instanceof WavePattern.DetachedShock b) {
+      return new double[] {b.before().mach(), dev.wavemark.core.gas.NormalShock.m2(b.before().mach(), b.shape().gamma()),
+          b.before().density(), b.before().density() * b.shape().densityBehind(0)};
+    }
     WavePattern.ConicalShock c = (WavePattern.ConicalShock) e;
     double behind = c.field().density(c.field().shockAngleRad());
     return new double[] {c.before().mach(), Double.NaN, 1.0, behind};
@@ -179,7 +183,7 @@ final class SceneJob {
   static ModelJson sensorModel(ModelJson m, UnaryOperator<Point2> f) {
     return new ModelJson(m.shape(), m.deflectionDeg(), m.incidenceDeg(), pt(m.leadingEdgePx(), f), m.chordPx(),
         m.angleToleranceDeg(), pts(m.wallPx(), f), m.wallSide(), pt(m.secondCornerPx(), f), m.secondDeflectionDeg(),
-        pts(m.leadingEdgesPx(), f), m.deflectionsDeg());
+        pts(m.leadingEdgesPx(), f), m.deflectionsDeg(), pt(m.centerPx(), f), m.noseRadiusPx(), m.noseRadiusTolerancePx());
   }
 
   private static double @Nullable [] pt(double @Nullable [] p, UnaryOperator<Point2> f) {

@@ -30,6 +30,15 @@ public final class BowShock {
   /** Largest accepted |gamma - 1.4|: the fit is for air only. */
   public static final double GAMMA_RANGE = 0.02;
 
+  /**
+   * The correlation's relative scatter in delta/R about the measurements it was fitted to, as a
+   * standard uncertainty. Not a published figure: Billig's paper shows the fit against data in
+   * plots and (as far as recalled) states no single scatter figure; 5 % is our assumption, a
+   * round value to be replaced by a published one. A Mach number from a stand-off carries it as
+   * a line of its budget.
+   */
+  public static final double STANDOFF_SCATTER = 0.05;
+
   private static final String NAME = "Billig's bow-shock correlation";
 
   private BowShock() {}

@@ -17,7 +17,7 @@ public sealed interface BodyShape {
   /** Every contract shape name, in documentation order. */
   List<String> NAMES = List.of(
       "wedge", "diamond", "flat-plate", "cone", "ramp", "expansion-corner", "double-ramp",
-      "shock-generator", "twin-generators", "none");
+      "shock-generator", "twin-generators", "none", "cylinder", "sphere");
 
   /**
    * A symmetric wedge: half-angle {@code halfAngleRad}, shoulders at {@code chordPx} from the
@@ -150,6 +150,39 @@ public sealed interface BodyShape {
     @Override
     public String contractName() {
       return "none";
+    }
+  }
+
+  /**
+   * A blunt body: a circular cylinder across the flow seen end-on ({@code cylinder}, plane
+   * flow) or a sphere ({@code sphere}, axisymmetric), its nose of radius {@code noseRadiusPx}
+   * about {@code centrePx}. The flow comes from the run; the stagnation line runs through the
+   * centre along it. {@code noseRadiusSigmaPx} is the standard uncertainty of the stated radius.
+   */
+  record Blunt(dev.wavemark.core.gas.BowShock.Nose nose, Point2 centrePx, double noseRadiusPx, double noseRadiusSigmaPx)
+      implements BodyShape {
+    /** Smallest nose radius accepted, px: below it the stand-off is a pixel or two. */
+    public static final double MIN_RADIUS_PX = 4;
+    /** The nose radius's standard uncertainty when the run file states none: this fraction of it. */
+    public static final double DEFAULT_RADIUS_SIGMA = 0.01;
+
+    public Blunt {
+      Checks.finite("nose centre x (px)", centrePx.x());
+      Checks.finite("nose centre y (px)", centrePx.y());
+      Checks.finite("noseRadiusPx", noseRadiusPx);
+      if (!(noseRadiusPx >= MIN_RADIUS_PX)) {
+        throw new dev.wavemark.core.WavemarkException(dev.wavemark.core.Problem.GEOMETRY_IMPOSSIBLE,
+            "noseRadiusPx must be at least " + MIN_RADIUS_PX + " px (got " + dev.wavemark.core.WavemarkException.num(noseRadiusPx) + ")");
+      }
+      if (!(noseRadiusSigmaPx >= 0 && noseRadiusSigmaPx < 0.5 * noseRadiusPx)) {
+        throw new dev.wavemark.core.WavemarkException(dev.wavemark.core.Problem.GEOMETRY_IMPOSSIBLE,
+            "noseRadiusTolerancePx must lie in [0, half the nose radius) (got " + dev.wavemark.core.WavemarkException.num(noseRadiusSigmaPx) + ")");
+      }
+    }
+
+    @Override
+    public String contractName() {
+      return nose == dev.wavemark.core.gas.BowShock.Nose.CYLINDER ? "cylinder" : "sphere";
     }
   }
 

@@ -12,6 +12,14 @@ import java.util.Optional;
  * @param contrast signed strength of the wave's signature in normalised intensity units
  * @param widthPx the wave's apparent thickness across the line, pixels
  * @param feature the model feature the detector attached it to, if any
+ * @param bow for a bow shock, its stand-off and vertex curvature ({@code line} is then its tangent at the vertex)
  */
 public record ObservedWave(
-    WaveKind kind, Optional<Side> side, FittedLine line, double contrast, double widthPx, Optional<Feature> feature) {}
+    WaveKind kind, Optional<Side> side, FittedLine line, double contrast, double widthPx, Optional<Feature> feature,
+    Optional<BowShockFit> bow) {
+
+  /** A straight wave (no bow-shock measurement). */
+  public ObservedWave(WaveKind kind, Optional<Side> side, FittedLine line, double contrast, double widthPx, Optional<Feature> feature) {
+    this(kind, side, line, contrast, widthPx, feature, Optional.empty());
+  }
+}

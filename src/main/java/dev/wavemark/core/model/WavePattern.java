@@ -68,6 +68,8 @@ public final class WavePattern {
       WallFlows.twinGenerators(b, t);
     } else if (shape instanceof BodyShape.Freestream f) {
       WallFlows.freestream(b, f);
+    } else if (shape instanceof BodyShape.Blunt n) {
+      BluntPattern.blunt(b, n);
     } else {
       throw new IllegalStateException("unhandled shape " + shape.contractName());
     }
@@ -141,6 +143,18 @@ public final class WavePattern {
     @Override
     public List<ExpectedWave> waves() {
       return List.of(upper, lower);
+    }
+  }
+
+  /**
+   * A detached bow shock ahead of a blunt nose, its shape from Billig's correlation
+   * ({@link dev.wavemark.core.gas.BowShock}); {@code wave} is its tangent at the vertex (on the
+   * stagnation line), the shock's point nearest upstream. See {@link BowShockShape}.
+   */
+  public record DetachedShock(ExpectedWave wave, State before, BowShockShape shape) implements Element {
+    @Override
+    public List<ExpectedWave> waves() {
+      return List.of(wave);
     }
   }
 

@@ -95,6 +95,13 @@ public final class WaveDetector {
     for (Found f : found) {
       out.add(f.toObserved(req.hints()));
     }
+    if (req.shape() instanceof BodyShape.Blunt b) {
+      Point2 nose = b.centrePx().plus(ImageAngles.unit(req.flowDirectionRad() + Math.PI).times(b.noseRadiusPx()));
+      if (!full.inFlowOrNear(nose.x(), nose.y(), 40)) {
+        throw new WavemarkException(Problem.MASK_OUTSIDE, label, "the model's nose at " + fmt(nose), "flow region of the");
+      }
+      BowShockSearch.find(ctx, b, req.hints()).ifPresent(out::add);
+    }
     if (out.isEmpty()) {
       throw new WavemarkException(Problem.NO_WAVE_FOUND, label, "wave",
           "check the optics mode (" + optics.contractName() + "), the model position and the mask");

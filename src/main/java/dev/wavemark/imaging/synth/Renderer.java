@@ -93,6 +93,8 @@ public final class Renderer {
         double shift = jitterPx * rnd.nextGaussian();
         if (e instanceof WavePattern.ConicalShock cone) {
           ConeRaster.paint(cone, raster, bench.shockThicknessPx(), shift, bench.spanM() / bench.metersPerPixel());
+        } else if (e instanceof WavePattern.DetachedShock bow) {
+          BluntRaster.paint(bow, raster, bench.shockThicknessPx(), shift);
         } else {
           raster.paint(e, bench.shockThicknessPx(), shift);
         }
