@@ -78,33 +78,80 @@ final class AngularScan {
     double lx0 = (ox - off) / k;
     double ly0 = (oy - off) / k;
     double rs = rMin / k;
+    boolean[] cell = low.cells();
+    int w = low.width;
+    float[] data = low.data;
     for (int i = 0; i < n; i++) {
       double a = a0 + i * step;
       double ux = Math.cos(a);
       double uy = -Math.sin(a);
       double re = (stop == null ? rMax : Math.min(rMax, distanceTo(ox, oy, ux, uy, stop))) / k;
+      // the radii at which the ray is inside the raster's last full cell; outside it every
+      // sample is missing, so the loop below needs no bounds test (the steps stay on rs + j)
+      double[] span = {rs, re};
+      clip(lx0, ux, w - 1, span);
+      clip(ly0, uy, low.height - 1, span);
       double sum = 0;
       int cnt = 0;
       double last = 0;
       int misses = 0;
-      for (double r = rs; r <= re; r += 1.0) {
-        double v = low.sample(lx0 + r * ux, ly0 + r * uy);
-        if (Double.isNaN(v)) {
-          if (cnt > 0 && ++misses > 6) {
-            break;
+      if (span[0] <= span[1]) {
+        double first = rs + Math.max(0, Math.ceil(span[0] - rs));
+        for (double r = first; r <= span[1]; r += 1.0) {
+          double x = lx0 + r * ux;
+          double y = ly0 + r * uy;
+          int x0 = (int) x;
+          int y0 = (int) y;
+          int c = y0 * w + x0;
+          if (!cell[c]) {
+            if (cnt > 0 && ++misses > 6) {
+              break;
+            }
+            continue;
           }
-          continue;
+          double fx = x - x0;
+          double fy = y - y0;
+          double top = data[c] + fx * (data[c + 1] - data[c]);
+          double bot = data[c + w] + fx * (data[c + w + 1] - data[c + w]);
+          misses = 0;
+          sum += top + fy * (bot - top);
+          cnt++;
+          last = r;
         }
-        misses = 0;
-        sum += v;
-        cnt++;
-        last = r;
       }
       value[i] = cnt >= 8 ? sum / Math.sqrt(cnt) : Double.NaN;
       level[i] = cnt >= 8 ? sum / cnt : Double.NaN;
       reach[i] = last * k;
     }
     return new AngularScan(ox, oy, a0, step, value, level, reach, rMin);
+  }
+
+  /**
+   * Narrows span = [lo, hi] to the radii r at which p0 + r d lies in [0, max) (strictly below
+   * max, so that the bilinear cell to the right or below exists). A span emptied has lo &gt; hi.
+   */
+  private static void clip(double p0, double d, double max, double[] span) {
+    double lim = Math.nextDown(max);
+    if (d == 0) {
+      if (!(p0 >= 0 && p0 <= lim)) {
+        span[0] = 1;
+        span[1] = 0;
+      }
+      return;
+    }
+    double ta = (0 - p0) / d;
+    double tb = (lim - p0) / d;
+    double lo = Math.min(ta, tb);
+    double hi = Math.max(ta, tb);
+    // rounding in the division may put the end a hair outside: step the ends inwards until inside
+    while (!(p0 + lo * d >= 0 && p0 + lo * d <= lim) && lo < hi) {
+      lo = Math.nextUp(lo);
+    }
+    while (!(p0 + hi * d >= 0 && p0 + hi * d <= lim) && hi > lo) {
+      hi = Math.nextDown(hi);
+    }
+    span[0] = Math.max(span[0], lo);
+    span[1] = Math.min(span[1], hi);
   }
 
   /**
@@ -135,7 +182,7 @@ final class AngularScan {
         d[m++] = profile[i] - profile[i - 1];
       }
     }
-    return Math.max(1e-12, 1.4826 * LineFit.medianAbs(java.util.Arrays.copyOf(d, m)) / Math.sqrt(2));
+    return Math.max(1e-12, 1.4826 * LineFit.medianAbs(d, m) / Math.sqrt(2));
   }
 
   private double at(int i) {
@@ -213,8 +260,8 @@ final class AngularScan {
           win[m++] = profile[k];
         }
       }
-      java.util.Arrays.sort(win, 0, m);
-      q[i] = profile[i] - win[m / 2];
+      // the upper median by quickselect (linear time; a sort of every window cost more than the pencil)
+      q[i] = profile[i] - org.ddogleg.sorting.QuickSelect.select(win, m / 2, m);
     }
     return q;
   }

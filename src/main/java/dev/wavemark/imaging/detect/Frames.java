@@ -18,15 +18,27 @@ final class Frames {
     }
     float min = Float.POSITIVE_INFINITY;
     float max = Float.NEGATIVE_INFINITY;
+    // v * 0 is 0 for every finite v and NaN for NaN and the infinities: one sum tells whether
+    // the frame is all finite, without a test per pixel; the bad pixel is looked up only then
+    float bad = 0;
     for (int y = 0; y < frame.height; y++) {
       int row = frame.startIndex + y * frame.stride;
       for (int x = 0; x < frame.width; x++) {
         float v = frame.data[row + x];
-        if (!Float.isFinite(v)) {
-          throw new WavemarkException(Problem.IMAGE_EMPTY, label + " (pixel (" + x + ", " + y + ") is " + v + ")");
+        bad += v * 0f;
+        min = v < min ? v : min;
+        max = v > max ? v : max;
+      }
+    }
+    if (bad != 0) {
+      for (int y = 0; y < frame.height; y++) {
+        int row = frame.startIndex + y * frame.stride;
+        for (int x = 0; x < frame.width; x++) {
+          float v = frame.data[row + x];
+          if (!Float.isFinite(v)) {
+            throw new WavemarkException(Problem.IMAGE_EMPTY, label + " (pixel (" + x + ", " + y + ") is " + v + ")");
+          }
         }
-        min = Math.min(min, v);
-        max = Math.max(max, v);
       }
     }
     if (!(max > min)) {
@@ -59,11 +71,11 @@ final class Frames {
       int row = y * r.width;
       for (int x = 0; x + 1 < r.width; x++) {
         if (r.flow[row + x] && r.flow[row + x + 1]) {
-          d[n++] = r.data[row + x + 1] - r.data[row + x];
+          d[n++] = Math.abs(r.data[row + x + 1] - r.data[row + x]);
         }
       }
     }
-    double mad = LineFit.medianAbs(java.util.Arrays.copyOf(d, n));
+    double mad = LineFit.medianInPlace(d, n);
     return Math.max(1e-9, 1.4826 * mad / Math.sqrt(2));
   }
 

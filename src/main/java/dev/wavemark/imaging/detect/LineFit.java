@@ -305,13 +305,36 @@ final class LineFit {
   }
 
   static double medianAbs(double[] v) {
-    double[] a = new double[v.length];
-    for (int i = 0; i < v.length; i++) {
+    return medianAbs(v, v.length);
+  }
+
+  /** The median of |v[0..n)| (mean of the two middle values for even n), 0 when n is 0; v is left alone. */
+  static double medianAbs(double[] v, int n) {
+    double[] a = new double[n];
+    for (int i = 0; i < n; i++) {
       a[i] = Math.abs(v[i]);
     }
-    java.util.Arrays.sort(a);
-    int m = a.length;
-    return m == 0 ? 0 : (m % 2 == 1 ? a[m / 2] : 0.5 * (a[m / 2 - 1] + a[m / 2]));
+    return medianInPlace(a, n);
+  }
+
+  /**
+   * The median of a[0..n) (mean of the two middle values for even n), 0 when n is 0; reorders a.
+   * ddogleg's quickselect (linear time) partitions the array about the upper middle, so the
+   * lower middle is the largest value before it.
+   */
+  static double medianInPlace(double[] a, int n) {
+    if (n == 0) {
+      return 0;
+    }
+    double upper = org.ddogleg.sorting.QuickSelect.select(a, n / 2, n);
+    if (n % 2 == 1) {
+      return upper;
+    }
+    double lower = Double.NEGATIVE_INFINITY;
+    for (int i = 0; i < n / 2; i++) {
+      lower = Math.max(lower, a[i]);
+    }
+    return 0.5 * (lower + upper);
   }
 
   private static double[][] invert3(double[][] m) {

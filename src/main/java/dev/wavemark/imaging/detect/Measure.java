@@ -65,18 +65,18 @@ final class Measure {
     double[][] prof = new double[count][];
     double[] mean = new double[m];
     int valid = 0;
+    // a rejected profile's array is reused for the next normal
+    double[] spare = null;
     for (int k = 0; k < count; k++) {
       double s = c.s0() + k * NORMAL_STEP_PX;
       double px = c.ox() + s * c.ux();
       double py = c.oy() + s * c.uy();
-      double[] p = new double[m];
-      boolean ok = true;
-      for (int j = 0; j < m && ok; j++) {
-        double o = j * SAMPLE_PX - halfWindowPx;
-        p[j] = full.sample(px + o * nx, py + o * ny);
-        ok = !Double.isNaN(p[j]);
+      if (spare == null) {
+        spare = new double[m];
       }
-      if (ok) {
+      if (full.sampleLine(px, py, nx, ny, SAMPLE_PX, halfWindowPx, m, spare)) {
+        double[] p = spare;
+        spare = null;
         prof[k] = p;
         valid++;
         for (int j = 0; j < m; j++) {

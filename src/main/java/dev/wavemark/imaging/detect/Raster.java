@@ -16,6 +16,11 @@ final class Raster {
   /** Pixel size of this raster in frame pixels (1 for the frame, 2 for a half-size copy...). */
   final int scale;
 
+  /** See {@link #cells()}; made on first use (a raster belongs to one detection, one thread). */
+  private boolean[] cells;
+  /** See {@link #flowCount()}; -1 until known. */
+  private int flowCount = -1;
+
   Raster(float[] data, boolean[] flow, int width, int height, int scale) {
     this.data = data;
     this.flow = flow;
@@ -54,39 +59,42 @@ final class Raster {
   /**
    * A copy whose flow mask excludes every pixel within {@code radius} (a square neighbourhood)
    * of a non-flow pixel or the border: the blur of the silhouette's and window's edges bleeds
-   * into the frame next to them. Separable running counts keep it linear in the pixel count.
+   * into the frame next to them. Separable: a pixel survives a pass when the run of flow pixels
+   * through it reaches {@code radius} either side, which a running count of consecutive flow
+   * pixels tells in one sweep (the vertical pass keeps one count per column and reads the
+   * mask row by row, in memory order).
    */
   Raster eroded(int radius) {
+    int span = 2 * radius + 1;
     boolean[] rows = new boolean[flow.length];
     for (int y = 0; y < height; y++) {
-      erodeLine(flow, rows, y * width, 1, width, radius);
+      int row = y * width;
+      int run = 0;
+      for (int x = 0; x < width; x++) {
+        run = flow[row + x] ? run + 1 : 0;
+        if (run >= span) {
+          rows[row + x - radius] = true;
+        }
+      }
     }
     boolean[] f = new boolean[flow.length];
-    for (int x = 0; x < width; x++) {
-      erodeLine(rows, f, x, width, height, radius);
-    }
-    return new Raster(data, f, width, height, scale);
-  }
-
-  private static void erodeLine(boolean[] in, boolean[] out, int start, int step, int n, int r) {
-    int bad = 0;
-    // bad = number of non-flow pixels in the window [i - r, i + r], with the outside counted as non-flow
-    for (int j = -r; j <= r; j++) {
-      if (j < 0 || j >= n || !in[start + j * step]) {
-        bad++;
+    int[] run = new int[width];
+    int count = 0;
+    for (int y = 0; y < height; y++) {
+      int row = y * width;
+      int out = (y - radius) * width;
+      for (int x = 0; x < width; x++) {
+        int c = rows[row + x] ? run[x] + 1 : 0;
+        run[x] = c;
+        if (c >= span) {
+          f[out + x] = true;
+          count++;
+        }
       }
     }
-    for (int i = 0; i < n; i++) {
-      out[start + i * step] = bad == 0;
-      int leave = i - r;
-      int enter = i + r + 1;
-      if (leave < 0 || !in[start + leave * step]) {
-        bad--;
-      }
-      if (enter >= n || !in[start + enter * step]) {
-        bad++;
-      }
-    }
+    Raster r = new Raster(data, f, width, height, scale);
+    r.flowCount = count;
+    return r;
   }
 
   /** Block-averaged copy, {@code k} x {@code k} frame pixels per pixel; flow where all are flow. */
@@ -96,19 +104,30 @@ final class Raster {
     float[] d = new float[w * h];
     boolean[] f = new boolean[w * h];
     float norm = 1f / (k * k);
+    float[] acc = new float[w];
+    boolean[] all = new boolean[w];
     for (int y = 0; y < h; y++) {
-      for (int x = 0; x < w; x++) {
-        float s = 0;
-        boolean all = true;
-        for (int j = 0; j < k; j++) {
-          int row = (y * k + j) * width + x * k;
+      java.util.Arrays.fill(acc, 0f);
+      java.util.Arrays.fill(all, true);
+      // the block's rows one after the other, each row's pixels in order: the same order of
+      // additions as a block-by-block loop, read along the frame's rows
+      for (int j = 0; j < k; j++) {
+        int row = (y * k + j) * width;
+        for (int x = 0; x < w; x++) {
+          int at = row + x * k;
+          float s = acc[x];
+          boolean a = all[x];
           for (int i = 0; i < k; i++) {
-            s += data[row + i];
-            all &= flow[row + i];
+            s += data[at + i];
+            a &= flow[at + i];
           }
+          acc[x] = s;
+          all[x] = a;
         }
-        d[y * w + x] = s * norm;
-        f[y * w + x] = all;
+      }
+      for (int x = 0; x < w; x++) {
+        d[y * w + x] = acc[x] * norm;
+        f[y * w + x] = all[x];
       }
     }
     return new Raster(d, f, w, h, scale * k);
@@ -130,19 +149,86 @@ final class Raster {
 
   /** Number of flow pixels. */
   int flowCount() {
-    int n = 0;
-    for (boolean b : flow) {
-      if (b) {
-        n++;
+    if (flowCount < 0) {
+      int n = 0;
+      for (boolean b : flow) {
+        if (b) {
+          n++;
+        }
       }
+      flowCount = n;
     }
-    return n;
+    return flowCount;
   }
 
   boolean inFlow(double x, double y) {
     int ix = (int) Math.round(x);
     int iy = (int) Math.round(y);
     return ix >= 0 && iy >= 0 && ix < width && iy < height && flow[iy * width + ix];
+  }
+
+  /**
+   * For each pixel (x, y) with x &lt; width - 1 and y &lt; height - 1: true when the bilinear cell
+   * it opens (it and its right, lower and lower-right neighbours) is wholly in the flow, which
+   * is when {@link #sample} gives a value inside that cell. Lets the pencil loops test one flag
+   * per sample instead of four.
+   */
+  boolean[] cells() {
+    if (cells == null) {
+      boolean[] c = new boolean[flow.length];
+      for (int y = 0; y + 1 < height; y++) {
+        int row = y * width;
+        for (int x = 0; x + 1 < width; x++) {
+          int i = row + x;
+          c[i] = flow[i] && flow[i + 1] && flow[i + width] && flow[i + width + 1];
+        }
+      }
+      cells = c;
+    }
+    return cells;
+  }
+
+  /**
+   * Fills out[0..m) with {@link #sample}(px + o_j nx, py + o_j ny), o_j = j step - half, the
+   * same values the single-point call gives; stops at the first sample outside the flow (or the
+   * raster) and returns false. When both ends lie inside the raster's last full cell, every
+   * sample does (the segment is convex), and the bounds tests are left out.
+   */
+  boolean sampleLine(double px, double py, double nx, double ny, double step, double half, int m, double[] out) {
+    double oe = (m - 1) * step - half;
+    double xa = px - half * nx;
+    double ya = py - half * ny;
+    double xb = px + oe * nx;
+    double yb = py + oe * ny;
+    double lim = Math.nextDown((double) (width - 1));
+    double limY = Math.nextDown((double) (height - 1));
+    if (!(Math.min(xa, xb) >= 0 && Math.max(xa, xb) <= lim && Math.min(ya, yb) >= 0 && Math.max(ya, yb) <= limY)) {
+      for (int j = 0; j < m; j++) {
+        double o = j * step - half;
+        out[j] = sample(px + o * nx, py + o * ny);
+        if (Double.isNaN(out[j])) {
+          return false;
+        }
+      }
+      return true;
+    }
+    for (int j = 0; j < m; j++) {
+      double o = j * step - half;
+      double x = px + o * nx;
+      double y = py + o * ny;
+      int x0 = (int) x;
+      int y0 = (int) y;
+      int i = y0 * width + x0;
+      if (!(flow[i] && flow[i + 1] && flow[i + width] && flow[i + width + 1])) {
+        return false;
+      }
+      double fx = x - x0;
+      double fy = y - y0;
+      double top = data[i] + fx * (data[i + 1] - data[i]);
+      double bot = data[i + width] + fx * (data[i + width + 1] - data[i + width]);
+      out[j] = top + fy * (bot - top);
+    }
+    return true;
   }
 
   /** Bilinear value at (x, y), or NaN outside the raster or the flow region. */
