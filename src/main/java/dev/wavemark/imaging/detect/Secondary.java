@@ -125,6 +125,8 @@ final class Secondary {
   static final double SLIP_WINDOW_RAD = Math.toRadians(7);
   /** The slip-line sector stays this far from the direction of a shock measured from the same point. */
   static final double SLIP_CLEAR_RAD = Math.toRadians(4);
+  /** The slip line's profiles start at most this far from its meeting point, px. */
+  static final double SLIP_MAX_SKIP_PX = 60;
   /** Hints this close to the searched origin describe the same meeting point, px. */
   static final double HINT_ORIGIN_PX = 40;
   /**
@@ -183,6 +185,8 @@ final class Secondary {
     }
     double a0 = centre - SLIP_WINDOW_RAD;
     double a1 = centre + SLIP_WINDOW_RAD;
+    // the nearest shock from the same point, as an angle from the slip line's expected direction
+    double nearest = 0.5 * Math.PI;
     for (WaveDetector.Found f : found) {
       if (!f.kind().isShock() || f.origin().distanceTo(s.origin()) > HINT_ORIGIN_PX) {
         continue;
@@ -195,6 +199,7 @@ final class Secondary {
         d += Math.PI;
       }
       double rel = ImageAngles.wrap(d - centre);
+      nearest = Math.min(nearest, Math.abs(rel));
       if (rel >= 0 && rel - SLIP_CLEAR_RAD < a1 - centre) {
         a1 = centre + Math.max(0, rel - SLIP_CLEAR_RAD);
       } else if (rel < 0 && rel + SLIP_CLEAR_RAD > a0 - centre) {
@@ -205,14 +210,19 @@ final class Secondary {
       return Optional.empty();
     }
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
-    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), a0, a1, SHORT_SKIP_PX, rMax);
+    // the profiles start where the nearest shock from the point lies a profile window away, so
+    // that neither the pencil nor the measured centres (nor where the line is taken to end) mix
+    // the faint slip line with the strong shock beside it
+    double window = ctx.shadow() ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX;
+    double s0 = Math.min(SLIP_MAX_SKIP_PX, Math.max(SHORT_SKIP_PX, (window + 2) / Math.sin(Math.max(nearest, Math.toRadians(5)))));
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), a0, a1, s0, rMax);
     AngularScan.Hit h = scan.strongestLine(WaveDetector.MIN_CANDIDATE_SNR, Math.toRadians(3) / scan.step, false);
     if (h == null) {
       return Optional.empty();
     }
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(h.index())));
     double a = scan.angle(h.index());
-    Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, Math.cos(a), -Math.sin(a), SHORT_SKIP_PX, scan.reach[i] - 2);
+    Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, Math.cos(a), -Math.sin(a), s0, scan.reach[i] - 2);
     Optional<WaveDetector.Found> f = measureShort(ctx, c, WaveKind.SLIP_LINE, s.side(), s.feature(), s.origin());
     double lo = a0;
     double hi = a1;
