@@ -42,6 +42,12 @@ class DetectorBenchmark {
 
   record Row(String kind, double errDeg, double sigmaDeg, String label, Case c) {}
 
+  /**
+   * With {@code -Dwavemark.bench.autoOptics=true} the accuracy table is detected with the optics
+   * left to the detector's guess (the run file's {@code auto}) instead of the picture's own.
+   */
+  static final boolean AUTO_OPTICS = Boolean.getBoolean("wavemark.bench.autoOptics");
+
   /** Number of pictures of the accuracy table. */
   static final int CASES = 63;
 
@@ -118,7 +124,7 @@ class DetectorBenchmark {
       }
       List<ObservedWave> found;
       try {
-        found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), o, shape, roll));
+        found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), AUTO_OPTICS ? Optics.AUTO : o, shape, roll));
       } catch (RuntimeException e) {
         System.out.println("detect failed " + cs + ": " + e.getMessage());
         failed++;
@@ -241,7 +247,7 @@ class DetectorBenchmark {
       List<ObservedWave> found;
       long t0 = System.nanoTime();
       try {
-        found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), o, shape, roll));
+        found = WaveDetector.create().detect(DetectionRequest.of(c.frame(), FlowRegion.of(c.mask()), AUTO_OPTICS ? Optics.AUTO : o, shape, roll));
       } catch (RuntimeException e) {
         found = List.of();
       }
