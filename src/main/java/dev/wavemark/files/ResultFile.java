@@ -167,9 +167,10 @@ public record ResultFile(
 
   /**
    * The tunnel check: the measured Mach number held against each reference the run file allows
-   * (the nominal Mach number, and the Mach numbers the pitot readings imply), each passed or
-   * failed against the tolerance. {@code verdict}: {@code pass} (every comparison with a tolerance
-   * passes), {@code fail}, or {@code no-tolerance}.
+   * (the nominal Mach number, and the Mach numbers the pitot readings imply), each judged against
+   * the tolerance with twice the measured standard uncertainty as a guard band. {@code verdict}:
+   * {@code pass} (every comparison with a tolerance passes), {@code fail} (one fails),
+   * {@code inconclusive} (none fails, one cannot be decided), or {@code no-tolerance}.
    */
   public record TunnelCheck(double measuredMach, double measuredUncertainty, List<Comparison> comparisons, List<String> notes,
       String verdict) {
@@ -183,7 +184,8 @@ public record ResultFile(
    * One reference against the measured Mach number: {@code reference} is {@code nominal},
    * {@code pitot/static}, {@code pitot/total} or {@code static/total}; {@code difference} is measured
    * minus reference, {@code differenceInSigma} that over the combined standard uncertainty;
-   * {@code outcome} {@code pass}, {@code fail} or {@code no-tolerance}.
+   * {@code outcome} {@code pass} (|difference| + 2u &le; tolerance), {@code fail} (|difference| - 2u
+   * &gt; tolerance), {@code inconclusive} (in between) or {@code no-tolerance}.
    */
   public record Comparison(String reference, double referenceMach, double difference, double differenceInSigma,
       @Nullable Double tolerance, String outcome) {}

@@ -79,14 +79,11 @@ public final class ResultFrames {
   /** The tunnel check's wire form. */
   public static ResultFile.TunnelCheck tunnel(TunnelCheck t) {
     List<ResultFile.Comparison> cs = new ArrayList<>();
-    boolean anyTolerance = false;
     for (TunnelCheck.Comparison c : t.comparisons()) {
-      anyTolerance |= c.outcome() != TunnelCheck.Outcome.NO_TOLERANCE;
       cs.add(new ResultFile.Comparison(c.reference().code(), c.referenceMach().value(), c.difference(), c.differenceInSigma(),
           c.tolerance().orElse(null), c.outcome().code()));
     }
-    String verdict = !anyTolerance ? "no-tolerance" : t.passes() ? "pass" : "fail";
-    return new ResultFile.TunnelCheck(t.inferred().value(), t.inferred().uncertainty(), cs, t.notes(), verdict);
+    return new ResultFile.TunnelCheck(t.inferred().value(), t.inferred().uncertainty(), cs, t.notes(), t.verdict().code());
   }
 
   private static @Nullable WaveMatch match(FrameInference inf, int observedIndex) {

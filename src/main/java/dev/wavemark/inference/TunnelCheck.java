@@ -14,6 +14,12 @@ import java.util.Optional;
  */
 public record TunnelCheck(Measured inferred, List<Comparison> comparisons, List<String> notes) {
 
+  /**
+   * Coverage factor of the expanded uncertainty used as the guard band (about 95 % coverage for
+   * a normal distribution; common practice).
+   */
+  public static final double COVERAGE_FACTOR = 2;
+
   public TunnelCheck {
     comparisons = List.copyOf(comparisons);
     notes = List.copyOf(notes);
@@ -21,14 +27,24 @@ public record TunnelCheck(Measured inferred, List<Comparison> comparisons, List<
 
   /** True when every comparison that has a tolerance passes (and there is at least one). */
   public boolean passes() {
-    boolean any = false;
+    return verdict() == Outcome.PASS;
+  }
+
+  /**
+   * The check as a whole: fail when any reference fails, else inconclusive when any is, else
+   * pass when any passes; no-tolerance when no reference has a tolerance.
+   */
+  public Outcome verdict() {
+    boolean pass = false;
+    boolean open = false;
     for (Comparison c : comparisons) {
       if (c.outcome == Outcome.FAIL) {
-        return false;
+        return Outcome.FAIL;
       }
-      any |= c.outcome == Outcome.PASS;
+      open |= c.outcome == Outcome.INCONCLUSIVE;
+      pass |= c.outcome == Outcome.PASS;
     }
-    return any;
+    return open ? Outcome.INCONCLUSIVE : pass ? Outcome.PASS : Outcome.NO_TOLERANCE;
   }
 
   /** Where a reference Mach number comes from. */
@@ -53,10 +69,17 @@ public record TunnelCheck(Measured inferred, List<Comparison> comparisons, List<
     }
   }
 
-  /** Pass or fail against the tunnel's Mach tolerance, or no tolerance given. */
+  /**
+   * Against the tunnel's Mach tolerance T, with the measurement's expanded uncertainty U = k u
+   * (k = {@value #COVERAGE_FACTOR}) as the guard band, the decision rule of ISO
+   * 14253-1 (from memory): pass when |difference| + U &le; T (conformance shown), fail when
+   * |difference| - U &gt; T (nonconformance shown), and inconclusive in between, where the
+   * pictures cannot tell; or no tolerance given.
+   */
   public enum Outcome {
     PASS("pass"),
     FAIL("fail"),
+    INCONCLUSIVE("inconclusive"),
     NO_TOLERANCE("no-tolerance");
 
     private final String code;
@@ -79,7 +102,7 @@ public record TunnelCheck(Measured inferred, List<Comparison> comparisons, List<
    * @param differenceInSigma the difference over the combined standard uncertainty; infinite
    *     when both are exact and differ
    * @param tolerance the tunnel's {@code machTolerance}, when given
-   * @param outcome pass when |difference| &le; tolerance
+   * @param outcome see {@link Outcome}
    */
   public record Comparison(
       Reference reference, Measured referenceMach, double difference, double differenceInSigma,

@@ -55,8 +55,10 @@ final class TunnelChecks {
     double diff = inferred.value() - referenceMach;
     double u = inferred.uncertainty();
     double z = u > 0 ? diff / u : (diff == 0 ? 0 : Math.copySign(Double.POSITIVE_INFINITY, diff));
+    double guard = TunnelCheck.COVERAGE_FACTOR * u;
     TunnelCheck.Outcome outcome = tol.isEmpty() ? TunnelCheck.Outcome.NO_TOLERANCE
-        : Math.abs(diff) <= tol.get() ? TunnelCheck.Outcome.PASS : TunnelCheck.Outcome.FAIL;
+        : Math.abs(diff) + guard <= tol.get() ? TunnelCheck.Outcome.PASS
+        : Math.abs(diff) - guard > tol.get() ? TunnelCheck.Outcome.FAIL : TunnelCheck.Outcome.INCONCLUSIVE;
     return new TunnelCheck.Comparison(ref, Measured.exact(referenceMach), diff, z, tol, outcome);
   }
 }

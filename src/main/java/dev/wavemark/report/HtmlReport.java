@@ -106,6 +106,8 @@ final class HtmlReport {
       String verdict = switch (c.outcome()) {
         case "pass" -> "within tolerance";
         case "fail" -> "outside tolerance";
+        case "inconclusive" -> "undecided: the uncertainty (2\u03c3 = " + Fmt.fixed(2 * t.measuredUncertainty(), 4)
+            + ") is too wide for the tolerance";
         default -> "no tolerance given";
       };
       out.add(new ReportPage.Check(reference(c.reference()), Fmt.fixed(c.referenceMach(), 4), dev, tol, status, verdict));
@@ -125,14 +127,6 @@ final class HtmlReport {
 
   private static String signed(@Nullable Double d) {
     return d == null || !Double.isFinite(d) ? Fmt.UNKNOWN : (d >= 0 ? "+" : "") + Fmt.fixed(d, 4);
-  }
-
-  private static String status(@Nullable Boolean pass) {
-    return pass == null ? "info" : pass ? "pass" : "fail";
-  }
-
-  private static String verdict(@Nullable Boolean pass) {
-    return pass == null ? "no tolerance given" : pass ? "within tolerance" : "outside tolerance";
   }
 
   private static ReportPage.FrameView frameView(ResultFile.Frame f, @Nullable String picture) {

@@ -47,6 +47,44 @@ class TunnelCheckTest {
     assertEquals(12.5, c.comparisons().get(0).differenceInSigma(), 1e-9);
   }
 
+  /**
+   * The guard band of the ISO 14253-1 decision rule (from memory): conformance is shown only when
+   * the difference plus the expanded uncertainty (k = 2) lies inside the tolerance, and
+   * nonconformance only when the difference minus it lies outside; in between the pictures cannot
+   * decide. A bow-shock Mach number of ± 0.15 against a ± 0.02 tolerance is such a case.
+   */
+  @Test
+  void anUncertaintyTooWideForTheToleranceIsInconclusiveNotAPass() {
+    Tunnel t = new Tunnel(Optional.of(3.0), Optional.of(0.02), Optional.empty());
+    TunnelCheck wide = Inference.checkTunnel(t, 1.4, new Measured(2.9996, 0.1518));
+    assertEquals(TunnelCheck.Outcome.INCONCLUSIVE, wide.comparisons().get(0).outcome());
+    assertEquals(TunnelCheck.Outcome.INCONCLUSIVE, wide.verdict());
+    assertFalse(wide.passes());
+    // inside the tolerance, but not by the guard band: 0.012 + 2 x 0.005 > 0.02
+    assertEquals(TunnelCheck.Outcome.INCONCLUSIVE, Inference.checkTunnel(t, 1.4, new Measured(3.012, 0.005)).verdict());
+    // outside the tolerance, but not by the guard band: 0.025 - 2 x 0.005 < 0.02
+    assertEquals(TunnelCheck.Outcome.INCONCLUSIVE, Inference.checkTunnel(t, 1.4, new Measured(3.025, 0.005)).verdict());
+    // outside by more than the guard band: 0.035 - 2 x 0.005 > 0.02
+    assertEquals(TunnelCheck.Outcome.FAIL, Inference.checkTunnel(t, 1.4, new Measured(3.035, 0.005)).verdict());
+    // inside by more than the guard band: 0.009 + 2 x 0.005 < 0.02
+    assertEquals(TunnelCheck.Outcome.PASS, Inference.checkTunnel(t, 1.4, new Measured(2.991, 0.005)).verdict());
+  }
+
+  @Test
+  void oneFailingReferenceFailsTheCheckEvenWhenAnotherIsUndecided() {
+    // Against the nominal 2.0 the difference 0.005 is undecided at u = 0.01; against the M = 2.5
+    // that pitot readings from NACA Report 1135, Table II at M1 = 2.50 (p02/p01 = 0.4990, from
+    // memory) imply, it is a clear fail.
+    double p02 = P01 * 0.4990;
+    Tunnel t = new Tunnel(Optional.of(2.0), Optional.of(0.02),
+        Optional.of(new Tunnel.Pitot(Optional.of(P01), Optional.of(p02), Optional.empty())));
+    TunnelCheck c = Inference.checkTunnel(t, 1.4, new Measured(2.005, 0.01));
+    assertEquals(TunnelCheck.Outcome.INCONCLUSIVE, c.comparisons().get(0).outcome(), c.toString());
+    assertEquals(2.5, c.comparisons().get(1).referenceMach().value(), TABLE_TOL, c.toString());
+    assertEquals(TunnelCheck.Outcome.FAIL, c.comparisons().get(1).outcome(), c.toString());
+    assertEquals(TunnelCheck.Outcome.FAIL, c.verdict());
+  }
+
   @Test
   void anImpossiblePitotReadingIsANoteNotAnException() {
     // A pitot pressure above the total pressure cannot come from a shock.
