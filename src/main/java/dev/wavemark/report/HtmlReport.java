@@ -222,7 +222,9 @@ final class HtmlReport {
     if (m != null) {
       out.add(new ReportPage.Fact("Model", model(m)));
     }
-    out.add(new ReportPage.Fact("Model angle tolerance", Fmt.fixed(s.modelAngleToleranceDeg(), 3) + "\u00b0 (standard uncertainty)"));
+    if (m == null || m.noseRadiusPx() == null) {
+      out.add(new ReportPage.Fact("Model angle tolerance", Fmt.fixed(s.modelAngleToleranceDeg(), 3) + "\u00b0 (standard uncertainty)"));
+    }
     out.add(new ReportPage.Fact("Calibration", s.calibration() == null ? "none (flow along +x, no lens correction, no scale)" : calibration(s.calibration())));
     if (s.tunnel() != null) {
       var t = s.tunnel();
@@ -273,6 +275,13 @@ final class HtmlReport {
     }
     if (m.chordPx() != null) {
       parts.add("chord " + Fmt.fixed(m.chordPx(), 1) + " px");
+    }
+    if (m.centerPx() != null) {
+      parts.add("centre at " + px(m.centerPx()));
+    }
+    if (m.noseRadiusPx() != null) {
+      parts.add("nose radius " + Fmt.fixed(m.noseRadiusPx(), 2) + " px"
+          + (m.noseRadiusTolerancePx() == null ? "" : " \u00b1 " + Fmt.fixed(m.noseRadiusTolerancePx(), 2) + " px (standard uncertainty)"));
     }
     if (m.wallPx() != null) {
       parts.add("wall through " + px(m.wallPx()[0]) + " and " + px(m.wallPx()[1]) + (m.wallSide() == null ? "" : ", solid " + m.wallSide()));

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.wavemark.core.Problem;
 import dev.wavemark.core.WavemarkException;
+import dev.wavemark.files.ModelJson;
 import dev.wavemark.files.ResultFile;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -38,6 +39,24 @@ class ReportTest {
     try (Stream<Path> s = Files.walk(dir)) {
       assertTrue(s.noneMatch(p -> p.getFileName().toString().endsWith(".part")), "no temporary file left behind");
     }
+  }
+
+  @Test
+  void aBluntBodyShowsItsNoseRadiusAndAnUndecidedTunnelCheckSaysWhy() throws Exception {
+    ResultFile base = Fixtures.result("cylinder", List.of(Fixtures.frame(0, Fixtures.MACH, "frame-0001.png")));
+    ModelJson cylinder = ModelJson.blunt("cylinder", new double[] {264, 192}, 32.0, 0.2);
+    ResultFile.Settings s = base.settings();
+    ResultFile.Settings blunt = new ResultFile.Settings(s.runFile(), s.gamma(), s.optics(), cylinder, s.calibration(), s.tunnel(),
+        s.images(), s.noFlowReference(), s.frameRange(), 0.0, s.annotatedFrames());
+    ResultFile.TunnelCheck undecided = new ResultFile.TunnelCheck(2.9996, 0.1518,
+        List.of(new ResultFile.Comparison("nominal", 3.0, -0.0004, -0.0004 / 0.1518, 0.02, "inconclusive")), List.of(), "inconclusive");
+    ResultFile.Summary sum = base.summary();
+    ResultFile r = new ResultFile(base.label(), base.tool(), base.frames(), new ResultFile.Summary(sum.mach(), sum.nominalMach(),
+        sum.frames(), sum.failedFrames(), sum.machTolerance(), sum.machScatter(), sum.budget(), undecided, sum.warnings()), blunt);
+    String page = Files.readString(Report.write(new Report.Input(r, Fixtures.WEDGE, 0, Map.of(), null), dir));
+    assertTrue(page.contains("nose radius 32.00 px \u00b1 0.20 px"), "the blunt body's radius and its tolerance are shown");
+    assertFalse(page.contains("Model angle tolerance"), "a blunt body has no angle to hold a tolerance on");
+    assertTrue(page.contains("undecided: the uncertainty (2\u03c3 = 0.3036) is too wide for the tolerance"), page);
   }
 
   @Test
