@@ -40,6 +40,12 @@ public final class WaveDetector {
   static final double SECOND_WINDOW_WIDTHS = 1.25;
   /** Smallest second-pass half-window, px. */
   static final double MIN_SECOND_WINDOW_PX = 4;
+  /**
+   * A fan boundary's profiles start where the other boundary is this many profile half-windows
+   * away across, so that it stays out of the central part searched (the step locator's box is
+   * half that part).
+   */
+  static final double FAN_SKIP_WINDOWS = 1.2;
   /** Angular tolerance around a hint, radians. */
   static final double HINT_TOLERANCE_RAD = Math.toRadians(8);
 
@@ -83,9 +89,12 @@ public final class WaveDetector {
       searches.add(narrow(s, req.hints()));
     }
     List<Found> found = new ArrayList<>();
+    // shocks first, so that the fan searches can leave every shock out of their pencils
+    searches.sort(java.util.Comparator.comparing(Search::fan));
     for (Search s : searches) {
       // a double ramp's second shock ends where it meets the first; beyond lies the merged shock
-      found.addAll(run(ctx, s, s.feature() == Feature.SECOND_CORNER ? shockOf(found, Feature.CORNER) : null));
+      found.addAll(run(ctx, s, s.feature() == Feature.SECOND_CORNER ? shockOf(found, Feature.CORNER) : null,
+          s.fan() ? shockBands(found, ctx.shadow()) : List.of()));
     }
     if (req.shape() instanceof BodyShape.Freestream f) {
       found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
@@ -157,7 +166,32 @@ public final class WaveDetector {
 
   /** Runs one search: the pencil, the best candidate(s), the accurate measurement. */
   static List<Found> run(Context ctx, Search s) {
-    return run(ctx, s, null);
+    return run(ctx, s, null, List.of());
+  }
+
+  /** Half-width of a measured shock's band left out of a fan's pencil, in multiples of its measured width. */
+  static final double SHOCK_BAND_WIDTHS = 1.5;
+  /** Smallest half-width of that band, px (schlieren; shadowgraph's dark band and caustic take more). */
+  static final double MIN_SHOCK_BAND_PX = 4;
+
+  /**
+   * The bands of the shocks measured so far, for {@link AngularScan#of(Raster, double, double,
+   * double, double, double, double, double[], List)}: each from a little before its fitted start
+   * on to the picture's edge (a shock's straight part ends where a fan meets it, but its trace
+   * goes on).
+   */
+  static List<double[]> shockBands(List<Found> found, boolean shadow) {
+    List<double[]> out = new ArrayList<>();
+    for (Found f : found) {
+      if (!f.kind().isShock()) {
+        continue;
+      }
+      LineFit.Result d = f.m().distortedFit();
+      double w = f.m().widthPx() > 0 ? f.m().widthPx() : 0;
+      double half = Math.max(shadow ? 2 * MIN_SHOCK_BAND_PX : MIN_SHOCK_BAND_PX, SHOCK_BAND_WIDTHS * w);
+      out.add(new double[] {d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - 20, Double.POSITIVE_INFINITY, half});
+    }
+    return out;
   }
 
   /** The first measured shock from feature {@code f}, or null. */
@@ -172,13 +206,14 @@ public final class WaveDetector {
 
   /**
    * Runs one search; with {@code stop} given, each ray of the pencil ends a profile window short
-   * of that line (another wave the searched one runs into).
+   * of that line (another wave the searched one runs into); samples on the {@code avoid} bands
+   * (see {@link #shockBands}) are left out of the pencil.
    */
-  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop) {
+  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop, List<double[]> avoid) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
     double[] clip = stop == null ? null
         : new double[] {stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX};
-    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax, clip);
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax, clip, avoid);
     double rTyp = 250;
     List<Found> out = new ArrayList<>();
     if (!s.fan()) {
@@ -203,7 +238,7 @@ public final class WaveDetector {
     }
     double spread = Math.abs(edges[1].index() - edges[0].index()) * scan.step;
     double window = SHOCK_WINDOW_PX;
-    double start = Math.max(ORIGIN_SKIP_PX, 2.5 * window / Math.max(spread, 1e-3));
+    double start = Math.max(ORIGIN_SKIP_PX, FAN_SKIP_WINDOWS * window / Math.max(spread, 1e-3));
     Signature sig = ctx.shadow() ? Signature.PEAK : Signature.STEP;
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
