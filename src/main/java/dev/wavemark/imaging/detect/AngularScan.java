@@ -75,8 +75,8 @@ final class AngularScan {
   /**
    * As {@link #of(Raster, double, double, double, double, double, double, double[])}, leaving out
    * of every ray the samples that lie on one of the {@code avoid} bands (waves already measured,
-   * each {@code {x, y, ux, uy, s0, s1, half}}: the points x + s u, s in [s0, s1], and everything
-   * within {@code half} of them across, frame px). A ray that crosses a shock at a small angle
+   * each {@code {x, y, ux, uy, s0, s1, half, ...}}: the points x + s u, s in [s0, s1], and
+   * everything within {@code half} of them across, frame px; further entries are not read). A ray that crosses a shock at a small angle
    * otherwise takes the shock's whole integral into its sum, which outweighs the faint, wide band
    * of a fan the ray lies in; the samples left out count neither as evidence nor as a gap.
    */

@@ -174,11 +174,43 @@ public final class WaveDetector {
   /** Smallest half-width of that band, px (schlieren; shadowgraph's dark band and caustic take more). */
   static final double MIN_SHOCK_BAND_PX = 4;
 
+  /** A shock's band starts this far before its fitted start, and a fan boundary stops at it up to this far beyond its fitted end, px. */
+  static final double BAND_MARGIN_PX = 20;
+
+  /**
+   * Where a fan boundary along direction {@code a} from the search's origin first runs into a
+   * measured shock (its fitted segment, see {@link #shockBands}), less that shock's band and a
+   * profile window; infinite if it meets none beyond {@code s0}. A fan ends where it meets a
+   * shock (a generator's shoulder fan at the reflected shock, a wedge's at its leading-edge
+   * shock); beyond, the boundary's profiles would take in the shock's own peak and what lies past it.
+   */
+  static double stopAt(Search s, double a, List<double[]> bands, double s0, double window) {
+    double ux = Math.cos(a);
+    double uy = -Math.sin(a);
+    double best = Double.POSITIVE_INFINITY;
+    for (double[] b : bands) {
+      double det = ux * b[3] - uy * b[2];
+      if (Math.abs(det) < 1e-9) {
+        continue;
+      }
+      double dx = b[0] - s.origin().x();
+      double dy = b[1] - s.origin().y();
+      // origin + t u = b + q v
+      double t = (dx * b[3] - dy * b[2]) / det;
+      double q = (dx * uy - dy * ux) / det;
+      if (t > s0 && q >= b[4] && q <= b[7]) {
+        best = Math.min(best, t - b[6] - window);
+      }
+    }
+    return best;
+  }
+
   /**
    * The bands of the shocks measured so far, for {@link AngularScan#of(Raster, double, double,
    * double, double, double, double, double[], List)}: each from a little before its fitted start
    * on to the picture's edge (a shock's straight part ends where a fan meets it, but its trace
-   * goes on).
+   * goes on), and as its last entry the end of its fitted segment plus a margin (for
+   * {@link #stopAt}).
    */
   static List<double[]> shockBands(List<Found> found, boolean shadow) {
     List<double[]> out = new ArrayList<>();
@@ -189,7 +221,8 @@ public final class WaveDetector {
       LineFit.Result d = f.m().distortedFit();
       double w = f.m().widthPx() > 0 ? f.m().widthPx() : 0;
       double half = Math.max(shadow ? 2 * MIN_SHOCK_BAND_PX : MIN_SHOCK_BAND_PX, SHOCK_BAND_WIDTHS * w);
-      out.add(new double[] {d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - 20, Double.POSITIVE_INFINITY, half});
+      out.add(new double[] {d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - BAND_MARGIN_PX, Double.POSITIVE_INFINITY, half,
+          d.endAlong() + BAND_MARGIN_PX});
     }
     return out;
   }
@@ -242,7 +275,8 @@ public final class WaveDetector {
     Signature sig = ctx.shadow() ? Signature.PEAK : Signature.STEP;
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
-      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start);
+      double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end);
     }
     // the head is the boundary steeper to the freestream
     double[] steep = new double[2];
@@ -274,9 +308,15 @@ public final class WaveDetector {
 
   /** Two passes of the accurate stage along the pencil direction of fractional index {@code idx}. */
   static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0) {
+    return measureAlong(ctx, scan, idx, sig, window, s0, Double.POSITIVE_INFINITY);
+  }
+
+  /** As {@link #measureAlong(Context, AngularScan, double, Signature, double, double)}, the profiles ending by {@code sEnd}. */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
+      double sEnd) {
     double a = scan.angle(idx);
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
-    double s1 = scan.reach[i] - 2;
+    double s1 = Math.min(sEnd, scan.reach[i] - 2);
     if (s1 - s0 < 40) {
       return null;
     }
