@@ -1,5 +1,7 @@
 package dev.wavemark.imaging.detect;
 
+import java.util.List;
+
 /**
  * The candidate stage: the reduced-resolution frame summed along each ray of a pencil from
  * a point where waves start (a Hough transform restricted to the lines through one point, which
@@ -67,6 +69,19 @@ final class AngularScan {
    */
   static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax,
       double @org.jspecify.annotations.Nullable [] stop) {
+    return of(low, ox, oy, a0, a1, rMin, rMax, stop, List.of());
+  }
+
+  /**
+   * As {@link #of(Raster, double, double, double, double, double, double, double[])}, leaving out
+   * of every ray the samples that lie on one of the {@code avoid} bands (waves already measured,
+   * each {@code {x, y, ux, uy, s0, s1, half, ...}}: the points x + s u, s in [s0, s1], and
+   * everything within {@code half} of them across, frame px; further entries are not read). A ray that crosses a shock at a small angle
+   * otherwise takes the shock's whole integral into its sum, which outweighs the faint, wide band
+   * of a fan the ray lies in; the samples left out count neither as evidence nor as a gap.
+   */
+  static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax,
+      double @org.jspecify.annotations.Nullable [] stop, List<double[]> avoid) {
     int k = low.scale;
     double rTyp = Math.max(rMin + 20, Math.min(rMax, 400));
     double step = Math.max(Math.toRadians(0.05), Math.min(Math.toRadians(0.5), 0.5 * k / rTyp));
@@ -109,6 +124,11 @@ final class AngularScan {
             }
             continue;
           }
+          if (!avoid.isEmpty() && onBand(ox + r * k * ux, oy + r * k * uy, avoid)) {
+            misses = 0;
+            last = r;
+            continue;
+          }
           double fx = x - x0;
           double fy = y - y0;
           double top = data[c] + fx * (data[c + 1] - data[c]);
@@ -124,6 +144,19 @@ final class AngularScan {
       reach[i] = last * k;
     }
     return new AngularScan(ox, oy, a0, step, value, level, reach, rMin);
+  }
+
+  /** True when frame point (x, y) lies on one of the bands (see {@link #of(Raster, double, double, double, double, double, double, double[], List)}). */
+  private static boolean onBand(double x, double y, List<double[]> avoid) {
+    for (double[] b : avoid) {
+      double dx = x - b[0];
+      double dy = y - b[1];
+      double s = dx * b[2] + dy * b[3];
+      if (s >= b[4] && s <= b[5] && Math.abs(dy * b[2] - dx * b[3]) <= b[6]) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /**
@@ -322,7 +355,14 @@ final class AngularScan {
 
   /**
    * The widest band of one sign (schlieren fan): the run of angles whose |profile| stays above
-   * half the run's median level; returns its two edges (head first in index order) or null.
+   * {@code minSnr} noise deviations, scored by its median level times its width; returns its two
+   * edges (lower index first) or null. Each edge is where the level changes fastest (see
+   * {@link #steepest}), not where it crosses half the band's level: a fan's level is not flat
+   * across it (the knife edge sees a share of the gradient that turns with the rays, and the
+   * density gradient itself changes through the fan), and every ray just outside a boundary still
+   * passes within the blur of it near the origin, where the fan is brightest, so that the band
+   * has long skirts. A half-level crossing then lies degrees outside the boundary; the steepest
+   * change of a step blurred by a symmetric kernel lies on it.
    */
   Hit[] widestBand(double minSnr, double minWidthIndex) {
     double sigma = noise();
@@ -349,10 +389,9 @@ final class AngularScan {
           vals[k - i] = sign * at(k);
         }
         double level = median(vals);
-        double half = 0.5 * level;
         int mid = (i + j) / 2;
-        double left = edge(mid, -1, sign, half);
-        double right = edge(mid, +1, sign, half);
+        double left = steepest(i, mid, sign);
+        double right = steepest(mid, j, -sign);
         double score = level * (right - left);
         if (score > bestScore) {
           bestScore = score;
@@ -364,18 +403,32 @@ final class AngularScan {
     return best;
   }
 
-  /** Where sign*profile first falls below {@code half} walking from index {@code from} in direction {@code dir}. */
-  private double edge(int from, int dir, int sign, double half) {
-    int k = from;
-    while (k + dir >= 0 && k + dir < profile.length && sign * at(k + dir) >= half) {
-      k += dir;
+  /**
+   * The fractional index in [lo, hi] where {@code sign} times the profile rises fastest: the
+   * centre of the largest peak of its central difference (smoothed over three angles), located
+   * by {@link Profiles#peak}'s level crossings.
+   */
+  private double steepest(int lo, int hi, int sign) {
+    int n = profile.length;
+    double[] d = new double[n];
+    for (int k = 1; k < n - 1; k++) {
+      d[k] = 0.5 * sign * (at(k + 1) - at(k - 1));
     }
-    if (k + dir < 0 || k + dir >= profile.length) {
-      return k;
+    double[] q = new double[n];
+    for (int k = 1; k < n - 1; k++) {
+      q[k] = (d[k - 1] + d[k] + d[k + 1]) / 3;
     }
-    double vi = sign * at(k);
-    double vo = sign * at(k + dir);
-    return k + dir * (vi - half) / Math.max(vi - vo, 1e-30);
+    Profiles.Located l = Profiles.peak(q, 1, Math.max(1, lo), Math.min(n - 2, hi));
+    if (l != null && l.centre() >= lo - 1 && l.centre() <= hi + 1) {
+      return l.centre();
+    }
+    int best = Math.max(1, lo);
+    for (int k = Math.max(1, lo); k <= Math.min(n - 2, hi); k++) {
+      if (q[k] > q[best]) {
+        best = k;
+      }
+    }
+    return best;
   }
 
   /** The two strongest thin lines of opposite sign at least {@code minSepIndex} apart (shadowgraph fan). */

@@ -94,8 +94,10 @@ final class Measure {
     int lo = m / 6;
     int hi = m - 1 - m / 6;
     int maxSep = (int) Math.round(1.4 * halfWindowPx / SAMPLE_PX);
-    // the noise of a located signature: the raw noise for lines and pairs, the derivative's for steps
-    double noiseSig = sig == Signature.STEP ? noise * 0.71 : noise;
+    // the noise of a located signature: the raw noise for lines and pairs; for steps, that of the
+    // difference of two means over a quarter of the profile (a quarter window, in px, of
+    // independent pixels each)
+    double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
     Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep);
@@ -189,7 +191,7 @@ final class Measure {
   static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
-      case STEP -> Profiles.step(p, sign, lo, hi);
+      case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));
       case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
     };
   }

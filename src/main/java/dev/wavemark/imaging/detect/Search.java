@@ -115,9 +115,14 @@ record Search(Point2 origin, double a0, double a1, boolean fan, WaveKind kind, S
     return shock(o, ax + g * EPS, ax + g * NEAR_NORMAL, kind, s, f);
   }
 
+  /**
+   * A plate edge's fan on side {@code s}: every ray of it lies on that side of the plate's
+   * direction (the tail leaves along the surface flow at its Mach angle), so the sector starts at
+   * the surface; rays beyond it run under the plate into the other side's waves.
+   */
   private static Search sideFan(Point2 o, double ax, Side s, Feature f) {
     int g = s.sign();
-    return fan(o, ax - g * Math.toRadians(30), ax + g * NEAR_NORMAL, s, f);
+    return fan(o, ax + g * EPS, ax + g * NEAR_NORMAL, s, f);
   }
 
   /** The wall's direction pointing downstream. */

@@ -85,7 +85,63 @@ final class Secondary {
           Feature.IMPINGEMENT);
       shortShock(ctx, r).ifPresent(out::add);
     }
+    Point2 shoulder = shoulder(g, ctx);
+    if (shoulder != null) {
+      List<WaveDetector.Found> all = new ArrayList<>(found);
+      all.addAll(out);
+      Side towards = g.wall().solidSide();
+      int s = towards.sign();
+      Search fan = Search.fan(shoulder, w + s * EPS, w + s * (g.deflectionRad() + NEAR_NORMAL), towards, Feature.SHOULDER);
+      out.addAll(WaveDetector.run(ctx, WaveDetector.narrow(fan, hints), null, WaveDetector.shockBands(all, ctx.shadow())));
+    }
     return out;
+  }
+
+  /** How far into the silhouette, beyond the flow region's eroded edge, the shoulder walk looks, px. */
+  static final double SHOULDER_PROBE_PX = 3;
+
+  /**
+   * A generator's shoulder, from its silhouette: the shape gives the leading edge and the
+   * deflection but not the length of the deflecting surface (a generator is made as long as the
+   * tunnel needs). Walks along the surface from the leading edge a few pixels inside the solid
+   * until the flow region starts again, behind the flat back, and corrects that point for the
+   * probe's offset and the erosion (the back taken square to the flow). Null when the flow
+   * region does not show the generator as solid there, or the picture ends first.
+   */
+  static @org.jspecify.annotations.Nullable Point2 shoulder(BodyShape.ShockGenerator g, WaveDetector.Context ctx) {
+    Raster full = ctx.full();
+    // the surface is turned by the deflection from the flow (not from the wall) towards the wall
+    double surface = ctx.flow() + g.wall().solidSide().sign() * g.deflectionRad();
+    int s = g.wall().solidSide().sign();
+    Point2 u = ImageAngles.unit(surface);
+    // into the generator: away from the wall, square to the surface
+    Point2 n = ImageAngles.unit(surface - s * 0.5 * Math.PI);
+    Point2 f = ImageAngles.unit(ctx.flow());
+    double d = WaveDetector.EDGE_MARGIN_PX + SHOULDER_PROBE_PX;
+    Point2 le = g.leadingEdgePx();
+    double limit = Math.hypot(full.width, full.height);
+    int solid = 0;
+    int open = 0;
+    for (double t = 2 * d; t < limit; t += 0.5) {
+      Point2 p = le.plus(u.times(t)).plus(n.times(d));
+      int x = (int) Math.round(p.x());
+      int y = (int) Math.round(p.y());
+      if (x < 0 || y < 0 || x >= full.width || y >= full.height) {
+        return null;
+      }
+      if (!full.flow[y * full.width + x]) {
+        solid++;
+        open = 0;
+      } else if (solid < 20) {
+        // still ahead of the body's thickness reaching the probe (or a speck of the mask)
+        solid = 0;
+      } else if (++open >= 8) {
+        double exit = t - 0.5 * (open - 1);
+        double len = exit + (d * n.dot(f) - WaveDetector.EDGE_MARGIN_PX) / u.dot(f);
+        return le.plus(u.times(len));
+      }
+    }
+    return null;
   }
 
   static List<Search> searches(BodyShape shape, List<WaveDetector.Found> found, WaveDetector.Context ctx) {

@@ -40,6 +40,12 @@ public final class WaveDetector {
   static final double SECOND_WINDOW_WIDTHS = 1.25;
   /** Smallest second-pass half-window, px. */
   static final double MIN_SECOND_WINDOW_PX = 4;
+  /**
+   * A fan boundary's profiles start where the other boundary is this many profile half-windows
+   * away across, so that it stays out of the central part searched (the step locator's box is
+   * half that part).
+   */
+  static final double FAN_SKIP_WINDOWS = 1.2;
   /** Angular tolerance around a hint, radians. */
   static final double HINT_TOLERANCE_RAD = Math.toRadians(8);
 
@@ -83,9 +89,12 @@ public final class WaveDetector {
       searches.add(narrow(s, req.hints()));
     }
     List<Found> found = new ArrayList<>();
+    // shocks first, so that the fan searches can leave every shock out of their pencils
+    searches.sort(java.util.Comparator.comparing(Search::fan));
     for (Search s : searches) {
       // a double ramp's second shock ends where it meets the first; beyond lies the merged shock
-      found.addAll(run(ctx, s, s.feature() == Feature.SECOND_CORNER ? shockOf(found, Feature.CORNER) : null));
+      found.addAll(run(ctx, s, s.feature() == Feature.SECOND_CORNER ? shockOf(found, Feature.CORNER) : null,
+          s.fan() ? shockBands(found, ctx.shadow()) : List.of()));
     }
     if (req.shape() instanceof BodyShape.Freestream f) {
       found.addAll(MachWaveFamily.find(ctx, f, req.hints()));
@@ -157,7 +166,65 @@ public final class WaveDetector {
 
   /** Runs one search: the pencil, the best candidate(s), the accurate measurement. */
   static List<Found> run(Context ctx, Search s) {
-    return run(ctx, s, null);
+    return run(ctx, s, null, List.of());
+  }
+
+  /** Half-width of a measured shock's band left out of a fan's pencil, in multiples of its measured width. */
+  static final double SHOCK_BAND_WIDTHS = 1.5;
+  /** Smallest half-width of that band, px (schlieren; shadowgraph's dark band and caustic take more). */
+  static final double MIN_SHOCK_BAND_PX = 4;
+
+  /** A shock's band starts this far before its fitted start, and a fan boundary stops at it up to this far beyond its fitted end, px. */
+  static final double BAND_MARGIN_PX = 20;
+
+  /**
+   * Where a fan boundary along direction {@code a} from the search's origin first runs into a
+   * measured shock (its fitted segment, see {@link #shockBands}), less that shock's band and a
+   * profile window; infinite if it meets none beyond {@code s0}. A fan ends where it meets a
+   * shock (a generator's shoulder fan at the reflected shock, a wedge's at its leading-edge
+   * shock); beyond, the boundary's profiles would take in the shock's own peak and what lies past it.
+   */
+  static double stopAt(Search s, double a, List<double[]> bands, double s0, double window) {
+    double ux = Math.cos(a);
+    double uy = -Math.sin(a);
+    double best = Double.POSITIVE_INFINITY;
+    for (double[] b : bands) {
+      double det = ux * b[3] - uy * b[2];
+      if (Math.abs(det) < 1e-9) {
+        continue;
+      }
+      double dx = b[0] - s.origin().x();
+      double dy = b[1] - s.origin().y();
+      // origin + t u = b + q v
+      double t = (dx * b[3] - dy * b[2]) / det;
+      double q = (dx * uy - dy * ux) / det;
+      if (t > s0 && q >= b[4] && q <= b[7]) {
+        best = Math.min(best, t - b[6] - window);
+      }
+    }
+    return best;
+  }
+
+  /**
+   * The bands of the shocks measured so far, for {@link AngularScan#of(Raster, double, double,
+   * double, double, double, double, double[], List)}: each from a little before its fitted start
+   * on to the picture's edge (a shock's straight part ends where a fan meets it, but its trace
+   * goes on), and as its last entry the end of its fitted segment plus a margin (for
+   * {@link #stopAt}).
+   */
+  static List<double[]> shockBands(List<Found> found, boolean shadow) {
+    List<double[]> out = new ArrayList<>();
+    for (Found f : found) {
+      if (!f.kind().isShock()) {
+        continue;
+      }
+      LineFit.Result d = f.m().distortedFit();
+      double w = f.m().widthPx() > 0 ? f.m().widthPx() : 0;
+      double half = Math.max(shadow ? 2 * MIN_SHOCK_BAND_PX : MIN_SHOCK_BAND_PX, SHOCK_BAND_WIDTHS * w);
+      out.add(new double[] {d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - BAND_MARGIN_PX, Double.POSITIVE_INFINITY, half,
+          d.endAlong() + BAND_MARGIN_PX});
+    }
+    return out;
   }
 
   /** The first measured shock from feature {@code f}, or null. */
@@ -172,13 +239,14 @@ public final class WaveDetector {
 
   /**
    * Runs one search; with {@code stop} given, each ray of the pencil ends a profile window short
-   * of that line (another wave the searched one runs into).
+   * of that line (another wave the searched one runs into); samples on the {@code avoid} bands
+   * (see {@link #shockBands}) are left out of the pencil.
    */
-  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop) {
+  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop, List<double[]> avoid) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
     double[] clip = stop == null ? null
         : new double[] {stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX};
-    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax, clip);
+    AngularScan scan = AngularScan.of(ctx.low(), s.origin().x(), s.origin().y(), s.a0(), s.a1(), ORIGIN_SKIP_PX, rMax, clip, avoid);
     double rTyp = 250;
     List<Found> out = new ArrayList<>();
     if (!s.fan()) {
@@ -203,11 +271,12 @@ public final class WaveDetector {
     }
     double spread = Math.abs(edges[1].index() - edges[0].index()) * scan.step;
     double window = SHOCK_WINDOW_PX;
-    double start = Math.max(ORIGIN_SKIP_PX, 2.5 * window / Math.max(spread, 1e-3));
+    double start = Math.max(ORIGIN_SKIP_PX, FAN_SKIP_WINDOWS * window / Math.max(spread, 1e-3));
     Signature sig = ctx.shadow() ? Signature.PEAK : Signature.STEP;
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
-      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start);
+      double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end);
     }
     // the head is the boundary steeper to the freestream
     double[] steep = new double[2];
@@ -239,9 +308,15 @@ public final class WaveDetector {
 
   /** Two passes of the accurate stage along the pencil direction of fractional index {@code idx}. */
   static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0) {
+    return measureAlong(ctx, scan, idx, sig, window, s0, Double.POSITIVE_INFINITY);
+  }
+
+  /** As {@link #measureAlong(Context, AngularScan, double, Signature, double, double)}, the profiles ending by {@code sEnd}. */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
+      double sEnd) {
     double a = scan.angle(idx);
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
-    double s1 = scan.reach[i] - 2;
+    double s1 = Math.min(sEnd, scan.reach[i] - 2);
     if (s1 - s0 < 40) {
       return null;
     }
