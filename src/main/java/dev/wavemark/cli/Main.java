@@ -45,7 +45,16 @@ public final class Main implements Runnable {
   public static void main(String[] args) {
     PrintWriter out = new PrintWriter(System.out, true);
     PrintWriter err = new PrintWriter(System.err, true);
-    int rc = commandLine(out, err).execute(args);
+    int rc;
+    try {
+      rc = commandLine(out, err).execute(args);
+    } catch (OutOfMemoryError e) {
+      // not an Exception, so picocli lets it through; what was written before it stays written
+      err.println(String.format(java.util.Locale.ROOT, "wavemark: out of memory (Java heap limit %d MB); run it with more, e.g."
+          + " java -Xmx8g -jar wavemark.jar ..., or give it fewer or smaller frames [out-of-memory]",
+          Runtime.getRuntime().maxMemory() >> 20));
+      rc = 1;
+    }
     out.flush();
     err.flush();
     System.exit(rc);

@@ -71,32 +71,32 @@ final class SceneJob {
     }
     double mach = s.mach();
     Renderer.Condition nominal = new Renderer.Condition(mach, gamma, flowDir, 0);
-    List<GrayU16> pages = new ArrayList<>();
     List<TruthFile.FrameJson> frames = new ArrayList<>();
     SplittableRandom run = new SplittableRandom(seed * 31 + 7);
-    WavePattern.Solved first = null;
-    for (int i = 0; i < n; i++) {
-      Renderer.Condition c = nominal;
-      if (n > 1) {
-        SceneFile.SequenceJson q = s.sequence();
-        double m = mach + i * orZero(q.machDriftPerFrame()) + orZero(q.machJitter()) * run.nextGaussian();
-        c = new Renderer.Condition(m, gamma, flowDir, orZero(q.shockJitterPx()));
+    // a sequence goes to the file a page at a time, so that its length is bounded by the disk only
+    try (SynthImages.PageWriter tiffOut = tiff ? SynthImages.openTiff(image) : null) {
+      for (int i = 0; i < n; i++) {
+        Renderer.Condition c = nominal;
+        if (n > 1) {
+          SceneFile.SequenceJson q = s.sequence();
+          double m = mach + i * orZero(q.machDriftPerFrame()) + orZero(q.machJitter()) * run.nextGaussian();
+          c = new Renderer.Condition(m, gamma, flowDir, orZero(q.shockJitterPx()));
+        }
+        long frameSeed = seed + 1000003L * i;
+        Renderer.Frame f = r.render(c, frameSeed);
+        if (tiffOut != null) {
+          tiffOut.add(f.image());
+        } else {
+          SynthImages.write(f.image(), image);
+        }
+        frames.add(new TruthFile.FrameJson(i, c.mach(), frameSeed,
+            f.pattern().expectedWaves().stream().map(w -> Math.toDegrees(w.angleToFlowRad())).toList()));
       }
-      long frameSeed = seed + 1000003L * i;
-      Renderer.Frame f = r.render(c, frameSeed);
-      pages.add(f.image());
-      if (first == null) {
-        first = f.pattern();
+      if (tiffOut != null) {
+        tiffOut.commit();
       }
-      frames.add(new TruthFile.FrameJson(i, c.mach(), frameSeed,
-          f.pattern().expectedWaves().stream().map(w -> Math.toDegrees(w.angleToFlowRad())).toList()));
     }
     Path dir = image.toAbsolutePath().getParent();
-    if (tiff) {
-      SynthImages.writeTiff(pages, image);
-    } else {
-      SynthImages.write(pages.get(0), image);
-    }
     Path refPath = null;
     if (s.reference() == null || s.reference()) {
       refPath = dir.resolve(base + ".tare" + (tiff ? ".tif" : ".png"));

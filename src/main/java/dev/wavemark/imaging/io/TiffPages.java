@@ -18,6 +18,7 @@ import java.io.File;
 import java.io.FileInputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.RandomAccessFile;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -96,9 +97,12 @@ final class TiffPages {
           "truncated: the page needs " + end + " bytes but the file has " + fileLength);
     }
     Object pixels;
-    try (InputStream in = open(fi)) {
+    boolean random = needsRandomAccess(fi);
+    try (InputStream in = open(random)) {
       ImageReader reader = new ImageReader(fi);
-      pixels = reader.readPixels(in, fi.getOffset());
+      // a page read by random access finds each strip by seeking to its offset; skipping to the
+      // first one through the stream would read every byte before it (all earlier pages)
+      pixels = reader.readPixels(in, random ? 0 : fi.getOffset());
     } catch (IOException e) {
       throw new WavemarkException(e, Problem.IMAGE_CORRUPT, label(page), e.getMessage());
     }
@@ -159,13 +163,18 @@ final class TiffPages {
     return end;
   }
 
-  private InputStream open(FileInfo fi) throws IOException {
-    InputStream in = new FileInputStream(path.toFile());
-    // as ImageJ's own FileOpener does: compressed or multi-strip pages need random access
-    if (fi.compression >= FileInfo.LZW || (fi.stripOffsets != null && fi.stripOffsets.length > 1)) {
-      return new RandomAccessStream(in);
+  /** As ImageJ's own FileOpener decides: compressed or multi-strip pages need random access. */
+  private static boolean needsRandomAccess(FileInfo fi) {
+    return fi.compression >= FileInfo.LZW || (fi.stripOffsets != null && fi.stripOffsets.length > 1);
+  }
+
+  private InputStream open(boolean random) throws IOException {
+    if (random) {
+      // over the file itself, so that a seek is a seek (over a plain stream ImageJ's
+      // RandomAccessStream would read, and cache in memory, everything up to the offset)
+      return new RandomAccessStream(new RandomAccessFile(path.toFile(), "r"));
     }
-    return new BufferedInputStream(in, 1 << 16);
+    return new BufferedInputStream(new FileInputStream(path.toFile()), 1 << 16);
   }
 
   private static ImageProcessor processor(FileInfo fi, Object pixels) {

@@ -44,8 +44,21 @@ public final class SynthImages {
 
   /** Writes frames as one multi-page, Deflate-compressed 16-bit TIFF. */
   public static void writeTiff(List<GrayU16> frames, Path file) {
-    List<BufferedImage> pages = frames.stream().map(f -> ConvertBufferedImage.convertTo(f, null)).toList();
-    writeWith("tiff", pages, file, "ZLib");
+    try (PageWriter w = PageWriter.open("tiff", file, "ZLib")) {
+      for (GrayU16 f : frames) {
+        w.add(ConvertBufferedImage.convertTo(f, null));
+      }
+      w.commit();
+    }
+  }
+
+  /**
+   * Opens a multi-page, Deflate-compressed 16-bit TIFF to be written a page at a time, so that a
+   * long sequence is never held in memory whole. {@link PageWriter#commit()} moves it into place;
+   * closing it without a commit leaves nothing behind.
+   */
+  public static PageWriter openTiff(Path file) {
+    return PageWriter.open("tiff", file, "ZLib");
   }
 
   public static boolean isTiff(Path file) {
@@ -54,42 +67,123 @@ public final class SynthImages {
   }
 
   private static void writeWith(String format, List<BufferedImage> pages, Path file, String compression) {
-    Path abs = file.toAbsolutePath();
-    Path tmp = abs.resolveSibling("." + abs.getFileName() + ".part");
-    Iterator<ImageWriter> it = ImageIO.getImageWritersByFormatName(format);
-    if (!it.hasNext()) {
-      throw new WavemarkException(Problem.WRITE_FAILED, file, "no " + format + " writer in this Java runtime");
+    try (PageWriter w = PageWriter.open(format, file, compression)) {
+      for (BufferedImage b : pages) {
+        w.add(b);
+      }
+      w.commit();
     }
-    ImageWriter w = it.next();
-    try {
-      Files.createDirectories(abs.getParent());
-      Files.deleteIfExists(tmp);
-      try (ImageOutputStream out = ImageIO.createImageOutputStream(tmp.toFile())) {
+  }
+
+  /**
+   * A picture file written page by page into a temporary sibling, then moved into place. Pages of
+   * a TIFF go out as they are added (the JDK's writer chains their directories as it goes).
+   */
+  public static final class PageWriter implements AutoCloseable {
+    private final Path file;
+    private final Path tmp;
+    private final ImageWriter writer;
+    private final ImageOutputStream out;
+    private final ImageWriteParam param;
+    private final boolean sequence;
+    private boolean started;
+    private boolean committed;
+
+    private PageWriter(Path file, Path tmp, ImageWriter writer, ImageOutputStream out, ImageWriteParam param) {
+      this.file = file;
+      this.tmp = tmp;
+      this.writer = writer;
+      this.out = out;
+      this.param = param;
+      this.sequence = writer.canWriteSequence();
+    }
+
+    static PageWriter open(String format, Path file, String compression) {
+      Path abs = file.toAbsolutePath();
+      Path tmp = abs.resolveSibling("." + abs.getFileName() + ".part");
+      Iterator<ImageWriter> it = ImageIO.getImageWritersByFormatName(format);
+      if (!it.hasNext()) {
+        throw new WavemarkException(Problem.WRITE_FAILED, file, "no " + format + " writer in this Java runtime");
+      }
+      ImageWriter w = it.next();
+      try {
+        Files.createDirectories(abs.getParent());
+        Files.deleteIfExists(tmp);
+        ImageOutputStream out = ImageIO.createImageOutputStream(tmp.toFile());
+        if (out == null) {
+          throw new IOException("cannot open " + tmp + " for writing");
+        }
         w.setOutput(out);
         ImageWriteParam p = w.getDefaultWriteParam();
         if (compression != null && p.canWriteCompressed()) {
           p.setCompressionMode(ImageWriteParam.MODE_EXPLICIT);
           p.setCompressionType(compression);
         }
-        if (pages.size() == 1) {
-          w.write(null, new IIOImage(pages.get(0), null, null), p);
-        } else {
-          w.prepareWriteSequence(null);
-          for (BufferedImage b : pages) {
-            w.writeToSequence(new IIOImage(b, null, null), p);
-          }
-          w.endWriteSequence();
-        }
-      } finally {
+        return new PageWriter(file, tmp, w, out, p);
+      } catch (IOException e) {
         w.dispose();
+        throw new WavemarkException(Problem.WRITE_FAILED, file, e.getMessage());
       }
+    }
+
+    /** Writes the next page (the only one, for a format without sequences). */
+    public void add(BufferedImage page) {
       try {
-        Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-      } catch (AtomicMoveNotSupportedException e) {
-        Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+        if (!sequence) {
+          if (started) {
+            throw new IllegalStateException(file + ": this format holds one picture");
+          }
+          writer.write(null, new IIOImage(page, null, null), param);
+        } else {
+          if (!started) {
+            writer.prepareWriteSequence(null);
+          }
+          writer.writeToSequence(new IIOImage(page, null, null), param);
+        }
+        started = true;
+      } catch (IOException e) {
+        throw new WavemarkException(Problem.WRITE_FAILED, file, e.getMessage());
       }
-    } catch (IOException e) {
-      throw new WavemarkException(Problem.WRITE_FAILED, file, e.getMessage());
+    }
+
+    /** Writes a 16-bit frame as the next page. */
+    public void add(GrayU16 frame) {
+      add(ConvertBufferedImage.convertTo(frame, null));
+    }
+
+    /** Finishes the file and moves it into place. */
+    public void commit() {
+      try {
+        if (sequence && started) {
+          writer.endWriteSequence();
+        }
+        out.close();
+        try {
+          Files.move(tmp, file.toAbsolutePath(), StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } catch (AtomicMoveNotSupportedException e) {
+          Files.move(tmp, file.toAbsolutePath(), StandardCopyOption.REPLACE_EXISTING);
+        }
+        committed = true;
+      } catch (IOException e) {
+        throw new WavemarkException(Problem.WRITE_FAILED, file, e.getMessage());
+      }
+    }
+
+    @Override
+    public void close() {
+      writer.dispose();
+      try {
+        out.close();
+      } catch (IOException e) {
+        // already closed by commit, or the write failed; the temporary file goes either way
+      }
+      if (!committed) {
+        try {
+          Files.deleteIfExists(tmp);
+        } catch (IOException e) {
+          // best effort: a hidden .part file is all that can remain
+        }
+      }
     }
   }
 }
