@@ -152,7 +152,7 @@ public final class ResultFrames {
     for (BudgetLine b : lines) {
       boolean rad = "rad".equals(b.inputUnit());
       boolean systematic = switch (b.source()) {
-        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA, NOSE_RADIUS, CORRELATION -> true;
+        case FLOW_DIRECTION, MODEL_ANGLE, GAMMA, NOSE_RADIUS, CORRELATION, FAN_LOCATOR -> true;
         case ANGLE_FIT, SCATTER, STANDOFF -> false;
       };
       out.add(new ResultFile.BudgetItem(b.source().code(), b.description(),

@@ -37,7 +37,13 @@ public record BudgetLine(
     /** The blunt nose's radius, from the run's stated tolerance (common to every frame), px. */
     NOSE_RADIUS("nose-radius"),
     /** The stand-off correlation's own scatter about the data it was fitted to, relative. */
-    CORRELATION("correlation");
+    CORRELATION("correlation"),
+    /**
+     * The fan-boundary locator's error common to every expansion-fan boundary of a frame (and
+     * taken as common to a run's frames), rad: in the detector benchmark the boundaries of one
+     * picture read low together.
+     */
+    FAN_LOCATOR("fan-locator");
 
     private final String code;
 

@@ -235,10 +235,11 @@ final class Combiner {
     List<BudgetLine> lines = new ArrayList<>();
     for (BudgetLine.Source src : List.of(BudgetLine.Source.ANGLE_FIT, BudgetLine.Source.FLOW_DIRECTION,
         BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA, BudgetLine.Source.STANDOFF, BudgetLine.Source.NOSE_RADIUS,
-        BudgetLine.Source.CORRELATION)) {
-      boolean bowOnly = src == BudgetLine.Source.STANDOFF || src == BudgetLine.Source.NOSE_RADIUS || src == BudgetLine.Source.CORRELATION;
-      if (bowOnly && inputs.stream().noneMatch(in -> in.source() == src)) {
-        continue; // the blunt-body lines appear only when a bow shock gave an estimate
+        BudgetLine.Source.CORRELATION, BudgetLine.Source.FAN_LOCATOR)) {
+      boolean onlyWhenUsed = src == BudgetLine.Source.STANDOFF || src == BudgetLine.Source.NOSE_RADIUS
+          || src == BudgetLine.Source.CORRELATION || src == BudgetLine.Source.FAN_LOCATOR;
+      if (onlyWhenUsed && inputs.stream().noneMatch(in -> in.source() == src)) {
+        continue; // the blunt-body lines only when a bow shock gave an estimate, the fan line only with a fan
       }
       double sumSq = 0;
       double sumIn = 0;

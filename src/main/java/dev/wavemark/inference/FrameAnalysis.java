@@ -192,6 +192,7 @@ final class FrameAnalysis {
       case STANDOFF -> observed.get(in.index()).bow().map(b -> b.standoffSigmaPx()).orElse(0.0);
       case NOSE_RADIUS -> run.model() instanceof BodyShape.Blunt b ? b.noseRadiusSigmaPx() : 0;
       case CORRELATION -> BowShock.STANDOFF_SCATTER;
+      case FAN_LOCATOR -> Estimators.FAN_LOCATOR_SIGMA_RAD;
     };
   }
 
@@ -211,13 +212,15 @@ final class FrameAnalysis {
                 ? "default, 1 % of the radius" : "run file");
         case CORRELATION -> String.format(Locale.ROOT,
             "Billig stand-off correlation ± %.0f %% of delta/R (assumed scatter, not a published figure)", 100 * in);
+        case FAN_LOCATOR -> String.format(Locale.ROOT,
+            "fan-boundary locator ± %.3f°, common to the frame's fan boundaries (detector benchmark)", Math.toDegrees(in));
       };
     }
 
     @Override
     public String unit(BudgetLine.Source source) {
       return switch (source) {
-        case ANGLE_FIT, FLOW_DIRECTION, MODEL_ANGLE -> "rad";
+        case ANGLE_FIT, FLOW_DIRECTION, MODEL_ANGLE, FAN_LOCATOR -> "rad";
         case GAMMA -> "1";
         case SCATTER -> "Birge ratio";
         case STANDOFF, NOSE_RADIUS -> "px";

@@ -25,6 +25,8 @@ record Linear(
 
     static final Input NOSE_RADIUS = new Input(BudgetLine.Source.NOSE_RADIUS, 0);
     static final Input CORRELATION = new Input(BudgetLine.Source.CORRELATION, 0);
+    /** One offset added to the angle to the flow of every fan boundary of the frame. */
+    static final Input FAN = new Input(BudgetLine.Source.FAN_LOCATOR, 0);
 
     static Input standoff(int observedIndex) {
       return new Input(BudgetLine.Source.STANDOFF, observedIndex);

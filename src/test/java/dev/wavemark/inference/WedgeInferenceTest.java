@@ -9,6 +9,7 @@ import dev.wavemark.core.model.ExpectedWave;
 import dev.wavemark.core.model.ObservedWave;
 import dev.wavemark.core.model.RunSpec;
 import dev.wavemark.core.model.Tunnel;
+import dev.wavemark.core.model.WaveKind;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -77,6 +78,37 @@ class WedgeInferenceTest {
     double flow = f.budget().stream().filter(l -> l.source() == BudgetLine.Source.FLOW_DIRECTION).findFirst().orElseThrow().machContribution();
     double single = f.estimates().get(0).mach().uncertainty();
     assertTrue(flow < single, "flow line " + flow + " vs single estimate " + single);
+  }
+
+  /**
+   * The fan boundaries of a frame share one locator error (measured in the detector benchmark):
+   * with the wedge's shoulder fans among the waves the budget carries a fan-locator line, common
+   * to them, and without fans it has none. Waves here lie exactly on theory's (production
+   * pattern, M 2.5), so the Mach number is the true one either way.
+   */
+  @Test
+  void fanBoundariesShareOneLocatorLineInTheBudget() {
+    RunSpec run = Fixtures.run(new BodyShape.Wedge(Math.toRadians(10), 0, Fixtures.LE, 200), 0, Math.toRadians(0.03),
+        Math.toRadians(0.05), Fixtures.nominal(2.5));
+    List<ObservedWave> all = new ArrayList<>();
+    List<ObservedWave> shocks = new ArrayList<>();
+    for (ExpectedWave e : dev.wavemark.core.model.WavePattern.of(run.model(), 2.5, 1.4, 0, Fixtures.W, Fixtures.H)) {
+      boolean fan = e.kind() == WaveKind.EXPANSION_HEAD || e.kind() == WaveKind.EXPANSION_TAIL;
+      ObservedWave o = Fixtures.along(e, 0, Math.toRadians(fan ? 0.1 : 0.05));
+      all.add(o);
+      if (!fan) {
+        shocks.add(o);
+      }
+    }
+    assertTrue(all.size() > shocks.size(), "the wedge's pattern has shoulder fans");
+    FrameInference withFans = Inference.ofFrame(run, all, Fixtures.W, Fixtures.H);
+    FrameInference without = Inference.ofFrame(run, shocks, Fixtures.W, Fixtures.H);
+    assertEquals(2.5, withFans.mach().orElseThrow().value(), 1e-6);
+    BudgetLine fanLine = withFans.budget().stream().filter(l -> l.source() == BudgetLine.Source.FAN_LOCATOR).findFirst().orElseThrow();
+    assertEquals(0.06, Math.toDegrees(fanLine.inputUncertainty()), 1e-12);
+    assertTrue(fanLine.machContribution() > 0, fanLine.toString());
+    assertTrue(without.budget().stream().noneMatch(l -> l.source() == BudgetLine.Source.FAN_LOCATOR), without.budget().toString());
+    assertEquals(withFans.mach().orElseThrow().uncertainty(), BudgetLine.total(withFans.budget()), 1e-12);
   }
 
   /**
