@@ -31,7 +31,31 @@ public final class AnalyzeCommand implements Callable<Integer> {
   public Integer call() {
     Pipeline.RunResult r = Pipeline.analyze(runFile, out, Main.version(), !noProgress && Progressing.wanted());
     summarise(spec.commandLine().getOut(), r.result(), r.report());
-    return 0;
+    failures(spec.commandLine().getErr(), r.result());
+    // the report is written either way; a run that gave no Mach number at all is a failure
+    return r.result().summary().mach() == null ? 1 : 0;
+  }
+
+  /** Failed frames shown on the terminal, a line each up to {@value #SHOWN_FAILURES}. */
+  static final int SHOWN_FAILURES = 5;
+
+  static void failures(PrintWriter err, ResultFile r) {
+    int shown = 0;
+    int failed = 0;
+    for (ResultFile.Frame f : r.frames()) {
+      if (!f.failed()) {
+        continue;
+      }
+      failed++;
+      if (shown < SHOWN_FAILURES) {
+        err.println("wavemark: " + f.error().message() + " [" + f.error().code() + "]");
+        shown++;
+      }
+    }
+    if (failed > shown) {
+      err.println("wavemark: " + (failed - shown) + " more frame(s) failed; every failure is in result.json and the report");
+    }
+    err.flush();
   }
 
   static void summarise(PrintWriter out, ResultFile r, Path report) {

@@ -61,6 +61,23 @@ class AnalyzeCommandTest {
   }
 
   @Test
+  void aRunWhoseOnlyFrameIsCorruptSaysWhyAndStillWritesItsReport() throws Exception {
+    Path samples = Path.of("sample-images").toAbsolutePath();
+    Path run = dir.resolve("w.run.json");
+    String text = Files.readString(samples.resolve("run-2731-wedge-m20.run.json"))
+        .replace("\"../calibration/bench.json\"", Json.MAPPER.writeValueAsString(samples.resolveSibling("calibration/bench.json").toString()));
+    Files.writeString(run, text);
+    byte[] png = Files.readAllBytes(samples.resolve("run-2731-wedge-m20.png"));
+    Files.write(dir.resolve("run-2731-wedge-m20.png"), java.util.Arrays.copyOf(png, 1000)); // truncated
+    Files.copy(samples.resolve("run-2731-wedge-m20.tare.png"), dir.resolve("run-2731-wedge-m20.tare.png"));
+    Run r = run("analyze", run.toString(), "--out", dir.resolve("out").toString(), "--no-progress");
+    assertEquals(1, r.rc(), r.both());
+    assertEquals(1, r.err().strip().lines().count(), r.both());
+    assertTrue(r.err().contains("run-2731-wedge-m20.png") && r.err().contains("[image-corrupt]"), r.both());
+    assertTrue(Files.exists(dir.resolve("out/report.html")) && Files.exists(dir.resolve("out/result.json")), r.both());
+  }
+
+  @Test
   void anUnknownShapeIsOneLine() throws Exception {
     Files.writeString(dir.resolve("y.run.json"), "{\"images\":{\"frames\":[\"a.png\"]},\"model\":{\"shape\":\"ogive\"}}");
     Run r = run("analyze", dir.resolve("y.run.json").toString(), "--out", dir.resolve("out").toString());
