@@ -76,6 +76,14 @@ public final class ResultFrames {
         s.tunnel().map(ResultFrames::tunnel).orElse(null), warnings);
   }
 
+  /** The entry with one more warning. */
+  public static ResultFile.Frame withWarning(ResultFile.Frame f, String warning) {
+    List<String> w = new ArrayList<>(f.warnings());
+    w.add(warning);
+    return new ResultFile.Frame(f.index(), f.file(), f.waves(), f.mach(), f.reflection(), w, f.error(), f.budget(), f.predicted(),
+        f.tunnel());
+  }
+
   /** The tunnel check's wire form. */
   public static ResultFile.TunnelCheck tunnel(TunnelCheck t) {
     List<ResultFile.Comparison> cs = new ArrayList<>();

@@ -5,8 +5,10 @@ import dev.wavemark.core.WavemarkException;
 import dev.wavemark.core.geom.Point2;
 import dev.wavemark.core.model.ExpectedWave;
 import dev.wavemark.core.model.ObservedWave;
+import dev.wavemark.core.model.Optics;
 import dev.wavemark.core.model.RunSpec;
 import dev.wavemark.core.model.WavePattern;
+import dev.wavemark.files.ResultFile;
 import dev.wavemark.files.ResultFrames;
 import dev.wavemark.imaging.calib.LensCorrection;
 import dev.wavemark.imaging.detect.DetectionRequest;
@@ -36,7 +38,8 @@ final class StandardAnalyser implements FrameAnalyser {
   private final WaveDetector detector = WaveDetector.create();
   private final Map<Long, Setup> setups = new ConcurrentHashMap<>();
 
-  private record Setup(FlowMask mask, Normalizer normalizer, Optional<UnaryOperator<Point2>> undistort, List<ExpectedWave> hints) {}
+  private record Setup(FlowMask mask, Normalizer normalizer, Optional<UnaryOperator<Point2>> undistort, List<ExpectedWave> hints,
+      Optics optics) {}
 
   StandardAnalyser(RunSpec spec, FrameSequence seq) {
     this.spec = spec;
@@ -48,11 +51,21 @@ final class StandardAnalyser implements FrameAnalyser {
     GrayF32 img = frame.image();
     Setup s = setups.computeIfAbsent(((long) img.width << 32) | img.height, k -> setup(img));
     GrayF32 norm = s.normalizer().apply(img);
-    DetectionRequest req = new DetectionRequest(norm, FlowRegion.of(s.mask().pixels()), spec.optics(), spec.model(),
+    DetectionRequest req = new DetectionRequest(norm, FlowRegion.of(s.mask().pixels()), s.optics(), spec.model(),
         spec.calibration().flowDirectionRad(), s.hints(), s.undistort(), frame.ref().label());
     List<ObservedWave> observed = detector.detect(req);
     FrameInference inf = Inference.ofFrame(spec, observed, img.width, img.height);
-    return new Analysed(ResultFrames.analysed(frame.index(), frame.ref().label(), observed, inf, spec), Optional.of(inf));
+    ResultFile.Frame entry = ResultFrames.analysed(frame.index(), frame.ref().label(), observed, inf, spec);
+    if (spec.optics() == Optics.AUTO && s.optics() != Optics.AUTO) {
+      entry = ResultFrames.withWarning(entry, guessed(s.optics()));
+    }
+    return new Analysed(entry, Optional.of(inf));
+  }
+
+  private static String guessed(Optics o) {
+    return "[optics-guessed] the run file gives no optics; the pictures were taken for "
+        + (o == Optics.SHADOWGRAPH ? "shadowgraph" : "schlieren")
+        + " (the guess is weak, and takes most shadowgraphs for schlieren: give optics in the run file)";
   }
 
   private Setup setup(GrayF32 first) {
@@ -71,6 +84,9 @@ final class StandardAnalyser implements FrameAnalyser {
         hints = List.of();
       }
     }
-    return new Setup(mask, n, und, hints);
+    // one guess for the run's frames of this size, from the first, when the run file does not say
+    Optics optics = spec.optics() == Optics.AUTO
+        ? WaveDetector.guessOptics(n.apply(first), FlowRegion.of(mask.pixels())) : spec.optics();
+    return new Setup(mask, n, und, hints, optics);
   }
 }

@@ -77,6 +77,26 @@ class AnalyzeCommandTest {
     assertTrue(Files.exists(dir.resolve("out/report.html")) && Files.exists(dir.resolve("out/result.json")), r.both());
   }
 
+  /** Without optics in the run file one guess serves the run, and every frame says it was a guess. */
+  @Test
+  void aRunFileWithoutOpticsIsAnalysedOnAGuessThatTheResultAdmits() throws Exception {
+    Path samples = Path.of("sample-images").toAbsolutePath();
+    com.fasterxml.jackson.databind.node.ObjectNode rf =
+        (com.fasterxml.jackson.databind.node.ObjectNode) Json.MAPPER.readTree(samples.resolve("run-2755-ramp-shadowgraph.run.json").toFile());
+    rf.remove("optics");
+    rf.put("calibration", samples.resolveSibling("calibration/bench.json").toString());
+    Files.copy(samples.resolve("run-2755-ramp-shadowgraph.png"), dir.resolve("run-2755-ramp-shadowgraph.png"));
+    Path run = dir.resolve("r.run.json");
+    Json.MAPPER.writeValue(run.toFile(), rf);
+    Run r = run("analyze", run.toString(), "--out", dir.resolve("out").toString(), "--no-progress");
+    assertEquals(0, r.rc(), r.both());
+    ResultFile res = ResultFile.read(dir.resolve("out/result.json"));
+    JsonNode truth = Json.MAPPER.readTree(samples.resolve("run-2755-ramp-shadowgraph.truth.json").toFile());
+    assertEquals(truth.get("mach").asDouble(), res.summary().mach().value(), 0.005, r.both());
+    assertTrue(res.frames().get(0).warnings().stream().anyMatch(w -> w.startsWith("[optics-guessed]") && w.contains("shadowgraph")),
+        res.frames().get(0).warnings().toString());
+  }
+
   @Test
   void anUnknownShapeIsOneLine() throws Exception {
     Files.writeString(dir.resolve("y.run.json"), "{\"images\":{\"frames\":[\"a.png\"]},\"model\":{\"shape\":\"ogive\"}}");

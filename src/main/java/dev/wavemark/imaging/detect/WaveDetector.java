@@ -52,6 +52,24 @@ public final class WaveDetector {
   private WaveDetector() {}
 
   /** The detector with its default settings. */
+  /** The reduction of the candidate stage's copy: 2, or more for frames over 1024 px. */
+  private static int reduction(Raster full) {
+    return Math.max(2, (int) Math.ceil(Math.max(full.width, full.height) / 512.0));
+  }
+
+  /**
+   * What the picture looks like, shadowgraph or schlieren: the guess {@link #detect} makes for
+   * {@link Optics#AUTO}, for a caller that wants one answer for a whole run. {@link Optics#AUTO}
+   * when the region leaves nothing to judge by.
+   */
+  public static Optics guessOptics(GrayF32 frame, FlowRegion region) {
+    Raster full = Raster.of(frame, region).eroded(EDGE_MARGIN_PX);
+    if (full.flowCount() < 100) {
+      return Optics.AUTO;
+    }
+    return Frames.guessOptics(full.reduced(reduction(full)));
+  }
+
   public static WaveDetector create() {
     return new WaveDetector();
   }
@@ -71,8 +89,7 @@ public final class WaveDetector {
     Frames.validate(frame, label);
     Raster full = Raster.of(frame, req.region()).eroded(EDGE_MARGIN_PX);
     Frames.validateRegion(full, req.region(), label);
-    int k = Math.max(2, (int) Math.ceil(Math.max(full.width, full.height) / 512.0));
-    Raster low = full.reduced(k);
+    Raster low = full.reduced(reduction(full));
     double noise = Frames.noise(full);
     Optics optics = req.optics() == Optics.AUTO ? Frames.guessOptics(low) : req.optics();
     UnaryOperator<Point2> und = req.undistort().orElse(null);
