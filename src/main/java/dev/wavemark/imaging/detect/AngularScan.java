@@ -81,7 +81,7 @@ final class AngularScan {
    * of a fan the ray lies in; the samples left out count neither as evidence nor as a gap.
    */
   static AngularScan of(Raster low, double ox, double oy, double a0, double a1, double rMin, double rMax,
-      double @org.jspecify.annotations.Nullable [] stop, List<double[]> avoid) {
+      double @org.jspecify.annotations.Nullable [] stop, List<WaveDetector.ShockBand> avoid) {
     int k = low.scale;
     double rTyp = Math.max(rMin + 20, Math.min(rMax, 400));
     double step = Math.max(Math.toRadians(0.05), Math.min(Math.toRadians(0.5), 0.5 * k / rTyp));
@@ -147,12 +147,9 @@ final class AngularScan {
   }
 
   /** True when frame point (x, y) lies on one of the bands (see {@link #of(Raster, double, double, double, double, double, double, double[], List)}). */
-  private static boolean onBand(double x, double y, List<double[]> avoid) {
-    for (double[] b : avoid) {
-      double dx = x - b[0];
-      double dy = y - b[1];
-      double s = dx * b[2] + dy * b[3];
-      if (s >= b[4] && s <= b[5] && Math.abs(dy * b[2] - dx * b[3]) <= b[6]) {
+  private static boolean onBand(double x, double y, List<WaveDetector.ShockBand> avoid) {
+    for (WaveDetector.ShockBand b : avoid) {
+      if (b.contains(x, y)) {
         return true;
       }
     }

@@ -51,7 +51,6 @@ public final class WaveDetector {
 
   private WaveDetector() {}
 
-  /** The detector with its default settings. */
   /** The reduction of the candidate stage's copy: 2, or more for frames over 1024 px. */
   private static int reduction(Raster full) {
     return Math.max(2, (int) Math.ceil(Math.max(full.width, full.height) / 512.0));
@@ -70,6 +69,7 @@ public final class WaveDetector {
     return Frames.guessOptics(full.reduced(reduction(full)));
   }
 
+  /** The detector with its default settings. */
   public static WaveDetector create() {
     return new WaveDetector();
   }
@@ -201,22 +201,22 @@ public final class WaveDetector {
    * shock (a generator's shoulder fan at the reflected shock, a wedge's at its leading-edge
    * shock); beyond, the boundary's profiles would take in the shock's own peak and what lies past it.
    */
-  static double stopAt(Search s, double a, List<double[]> bands, double s0, double window) {
+  static double stopAt(Search s, double a, List<WaveDetector.ShockBand> bands, double s0, double window) {
     double ux = Math.cos(a);
     double uy = -Math.sin(a);
     double best = Double.POSITIVE_INFINITY;
-    for (double[] b : bands) {
-      double det = ux * b[3] - uy * b[2];
+    for (ShockBand b : bands) {
+      double det = ux * b.uy() - uy * b.ux();
       if (Math.abs(det) < 1e-9) {
         continue;
       }
-      double dx = b[0] - s.origin().x();
-      double dy = b[1] - s.origin().y();
+      double dx = b.cx() - s.origin().x();
+      double dy = b.cy() - s.origin().y();
       // origin + t u = b + q v
-      double t = (dx * b[3] - dy * b[2]) / det;
+      double t = (dx * b.uy() - dy * b.ux()) / det;
       double q = (dx * uy - dy * ux) / det;
-      if (t > s0 && q >= b[4] && q <= b[7]) {
-        best = Math.min(best, t - b[6] - window);
+      if (t > s0 && q >= b.from() && q <= b.fittedEnd()) {
+        best = Math.min(best, t - b.halfWidth() - window);
       }
     }
     return best;
@@ -229,8 +229,8 @@ public final class WaveDetector {
    * goes on), and as its last entry the end of its fitted segment plus a margin (for
    * {@link #stopAt}).
    */
-  static List<double[]> shockBands(List<Found> found, boolean shadow) {
-    List<double[]> out = new ArrayList<>();
+  static List<ShockBand> shockBands(List<Found> found, boolean shadow) {
+    List<ShockBand> out = new ArrayList<>();
     for (Found f : found) {
       if (!f.kind().isShock()) {
         continue;
@@ -238,10 +238,26 @@ public final class WaveDetector {
       LineFit.Result d = f.m().distortedFit();
       double w = f.m().widthPx() > 0 ? f.m().widthPx() : 0;
       double half = Math.max(shadow ? 2 * MIN_SHOCK_BAND_PX : MIN_SHOCK_BAND_PX, SHOCK_BAND_WIDTHS * w);
-      out.add(new double[] {d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - BAND_MARGIN_PX, Double.POSITIVE_INFINITY, half,
-          d.endAlong() + BAND_MARGIN_PX});
+      out.add(new ShockBand(d.cx(), d.cy(), d.ux(), d.uy(), d.startAlong() - BAND_MARGIN_PX, Double.POSITIVE_INFINITY, half,
+          d.endAlong() + BAND_MARGIN_PX));
     }
     return out;
+  }
+
+  /**
+   * A measured shock's band: its fitted line (centre and unit direction, distorted picture
+   * pixels), the stretch along it from {@code from} to {@code to} and {@code halfWidth} either
+   * side that a fan's pencil leaves out, and where its fitted segment ends (plus a margin), at
+   * which a fan boundary running into it stops.
+   */
+  record ShockBand(double cx, double cy, double ux, double uy, double from, double to, double halfWidth, double fittedEnd) {
+    /** Whether picture point (x, y) lies on the band. */
+    boolean contains(double x, double y) {
+      double dx = x - cx;
+      double dy = y - cy;
+      double s = dx * ux + dy * uy;
+      return s >= from && s <= to && Math.abs(dy * ux - dx * uy) <= halfWidth;
+    }
   }
 
   /** The first measured shock from feature {@code f}, or null. */
@@ -259,7 +275,7 @@ public final class WaveDetector {
    * of that line (another wave the searched one runs into); samples on the {@code avoid} bands
    * (see {@link #shockBands}) are left out of the pencil.
    */
-  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop, List<double[]> avoid) {
+  static List<Found> run(Context ctx, Search s, LineFit.@org.jspecify.annotations.Nullable Result stop, List<ShockBand> avoid) {
     double rMax = Math.hypot(ctx.full().width, ctx.full().height);
     double[] clip = stop == null ? null
         : new double[] {stop.cx(), stop.cy(), stop.ux(), stop.uy(), ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX};
