@@ -43,7 +43,7 @@ final class Secondary {
       out.addAll(WaveDetector.run(ctx, s));
     }
     if (shape instanceof BodyShape.DoubleRamp r) {
-      rampReflection(r, found, ctx, hints).ifPresent(out::add);
+      out.addAll(rampReflection(r, found, ctx, hints));
     }
     List<WaveDetector.Found> all = new ArrayList<>(found);
     all.addAll(out);
@@ -321,28 +321,104 @@ final class Secondary {
   /**
    * A double ramp's reflected wave: from where the ramp shocks meet, back towards the ramp, at
    * least a Mach angle (taken as 20 degrees, below any supersonic Mach angle) from the flow behind
-   * the second shock. A weak shock is searched for; when the theory (hint) makes it an expansion
-   * it is not searched, since a weak fan from a point is not told from the slip line and merged
-   * shock beside it by the fan search.
+   * the second shock. It is weak, a shock or a fan by a few thousandths of the freestream density
+   * either way, and a fan that weak is thinner than the blur: the strongest thin line of the
+   * sector is measured and its sign decides ({@link #compressive}). A compression is the reflected
+   * shock; an expansion is a fan whose head and tail are that one line.
    */
-  static Optional<WaveDetector.Found> rampReflection(BodyShape.DoubleRamp r, List<WaveDetector.Found> found, WaveDetector.Context ctx,
+  static List<WaveDetector.Found> rampReflection(BodyShape.DoubleRamp r, List<WaveDetector.Found> found, WaveDetector.Context ctx,
       List<ExpectedWave> hints) {
     Point2 x = crossing(found, Feature.CORNER, Feature.SECOND_CORNER, ctx);
-    if (x == null) {
-      return Optional.empty();
+    WaveDetector.Found ref = first(found, Feature.CORNER);
+    if (x == null || ref == null) {
+      return List.of();
     }
     Side s = r.wall().solidSide().opposite();
     double flow2 = Search.wallDirection(r.wall(), ctx.flow()) + s.sign() * (r.deflectionRad() + r.secondDeflectionRad());
     int g = -s.sign();
     Search sr = Search.shock(x, flow2 + g * MIN_REFLECTED_ANGLE_RAD, flow2 + g * NEAR_NORMAL, WaveKind.REFLECTED_SHOCK, s.opposite(),
         Feature.INTERSECTION);
-    for (ExpectedWave h : hints) {
-      boolean here = h.feature() == Feature.INTERSECTION && h.side() == s.opposite() && h.startPx().distanceTo(x) < HINT_ORIGIN_PX;
-      if (here && (h.kind() == WaveKind.EXPANSION_HEAD || h.kind() == WaveKind.EXPANSION_TAIL)) {
-        return Optional.empty();
+    Optional<WaveDetector.Found> w = shortShock(ctx, WaveDetector.narrow(sr, hints));
+    if (w.isEmpty()) {
+      return List.of();
+    }
+    int sign = compressive(ctx, w.get(), flow2, ref, ctx.flow());
+    if (sign >= 0) {
+      return List.of(w.get());
+    }
+    WaveDetector.Found f = w.get();
+    return List.of(new WaveDetector.Found(WaveKind.EXPANSION_HEAD, f.side(), f.feature(), f.m(), f.origin()),
+        new WaveDetector.Found(WaveKind.EXPANSION_TAIL, f.side(), f.feature(), f.m(), f.origin()));
+  }
+
+  /**
+   * Whether a measured thin wave compresses (+1) or expands (-1) the flow crossing it, or 0 when
+   * the optics cannot tell: the sign of its signal against that of a shock known to compress,
+   * each taken along its own downstream normal, so that the picture's own polarity is the
+   * reference and neither the knife edge's side nor a negative print changes the call.
+   * Shadowgraph puts the bright band of a compression on its dense (downstream) side, so each
+   * line's odd moment along the downstream normal is compared; schlieren sees the density
+   * gradient along the sensing axis (across a vertical knife edge, x), so each line's mean peak
+   * is divided by the sign of its downstream normal's component along that axis.
+   */
+  static int compressive(WaveDetector.Context ctx, WaveDetector.Found w, double flowW, WaveDetector.Found ref, double flowRef) {
+    double a = polaritySignal(ctx, w.m().distortedFit(), flowW);
+    double b = polaritySignal(ctx, ref.m().distortedFit(), flowRef);
+    if (!(a != 0 && b != 0)) {
+      return 0;
+    }
+    return Math.signum(a) == Math.signum(b) ? 1 : -1;
+  }
+
+  /** A schlieren line whose normal is within this of square to the sensing axis has no sign to read. */
+  static final double MIN_SENSED_COMPONENT = 0.1;
+
+  /** A line's signed signal along its downstream normal (see {@link #compressive}); 0 where unread. */
+  static double polaritySignal(WaveDetector.Context ctx, LineFit.Result f, double flowRad) {
+    Point2 fl = ImageAngles.unit(flowRad);
+    double nx = -f.uy();
+    double ny = f.ux();
+    if (nx * fl.x() + ny * fl.y() < 0) {
+      nx = -nx;
+      ny = -ny;
+    }
+    boolean shadow = ctx.shadow();
+    double half = shadow ? WaveDetector.SHADOW_WINDOW_PX : WaveDetector.SHOCK_WINDOW_PX;
+    int m = (int) Math.round(2 * half / Measure.SAMPLE_PX) + 1;
+    double[] mean = new double[m];
+    double[] buf = new double[m];
+    int n = 0;
+    for (double t = f.startAlong(); t <= f.endAlong(); t += Measure.NORMAL_STEP_PX) {
+      if (ctx.full().sampleLine(f.cx() + t * f.ux(), f.cy() + t * f.uy(), nx, ny, Measure.SAMPLE_PX, half, m, buf)) {
+        for (int j = 0; j < m; j++) {
+          mean[j] += buf[j];
+        }
+        n++;
       }
     }
-    return shortShock(ctx, WaveDetector.narrow(sr, hints));
+    if (n == 0) {
+      return 0;
+    }
+    double[] q = Profiles.detrend(mean, 3);
+    int mid = m / 2;
+    if (shadow) {
+      double moment = 0;
+      for (int j = 0; j < m; j++) {
+        moment += (j - mid) * q[j];
+      }
+      return moment;
+    }
+    double sensed = ctx.optics() == dev.wavemark.core.model.Optics.SCHLIEREN_VERTICAL_EDGE ? nx : ny;
+    if (Math.abs(sensed) < MIN_SENSED_COMPONENT) {
+      return 0;
+    }
+    double peak = 0;
+    for (int j = m / 3; j < m - m / 3; j++) {
+      if (Math.abs(q[j]) > Math.abs(peak)) {
+        peak = q[j];
+      }
+    }
+    return peak * Math.signum(sensed);
   }
 
   /** A reflected wave leaves the flow behind the second shock at least this steeply. */

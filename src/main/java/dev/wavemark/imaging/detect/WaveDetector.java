@@ -290,7 +290,7 @@ public final class WaveDetector {
         return out;
       }
       Measure.Result m = measureAlong(ctx, scan, h.index(), ctx.shadow() ? Signature.DIPOLE : Signature.PEAK,
-          ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX, ORIGIN_SKIP_PX);
+          ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX, ORIGIN_SKIP_PX, Double.POSITIVE_INFINITY, clip);
       if (m != null) {
         out.add(new Found(s.kind(), s.side(), s.feature(), m, s.origin()));
       }
@@ -309,7 +309,7 @@ public final class WaveDetector {
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
       double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
-      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end);
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end, null);
     }
     // the head is the boundary steeper to the freestream
     double[] steep = new double[2];
@@ -339,18 +339,43 @@ public final class WaveDetector {
     return Math.max(MIN_SECOND_WINDOW_PX, Math.min(window, SECOND_WINDOW_WIDTHS * widthPx));
   }
 
-  /** Two passes of the accurate stage along the pencil direction of fractional index {@code idx}. */
-  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0) {
-    return measureAlong(ctx, scan, idx, sig, window, s0, Double.POSITIVE_INFINITY);
+  /**
+   * How far along a candidate its profiles (half-length {@code window}, square to it) stay half a
+   * window clear of the line {@code stop} = (x, y, ux, uy, ...): a profile at distance d from that
+   * line reaches d - window cos(phi) from it, phi the crossing angle, so the last one stands
+   * (cos phi + 1/2) window / sin phi before the crossing; infinite when the candidate does not
+   * meet the line ahead.
+   */
+  static double clearOf(Measure.Candidate c, double[] stop, double window) {
+    double det = c.ux() * stop[3] - c.uy() * stop[2];
+    if (Math.abs(det) < 1e-9) {
+      return Double.POSITIVE_INFINITY;
+    }
+    double t = ((stop[0] - c.ox()) * stop[3] - (stop[1] - c.oy()) * stop[2]) / det;
+    double cos = Math.abs(c.ux() * stop[2] + c.uy() * stop[3]);
+    return t > 0 ? t - window * (cos + 0.5) / Math.abs(det) : Double.POSITIVE_INFINITY;
   }
 
-  /** As {@link #measureAlong(Context, AngularScan, double, Signature, double, double)}, the profiles ending by {@code sEnd}. */
+  /** The shortest ray a primary wave is measured along, px. */
+  static final double MIN_LINE_PX = 40;
+
+  /** Two passes of the accurate stage along the pencil direction of fractional index {@code idx}. */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0) {
+    return measureAlong(ctx, scan, idx, sig, window, s0, Double.POSITIVE_INFINITY, null);
+  }
+
+  /**
+   * As {@link #measureAlong(Context, AngularScan, double, Signature, double, double)}, the profiles
+   * ending by {@code sEnd}, and, when the wave runs into another ({@code stop}, as for
+   * {@link AngularScan}), the second pass's profiles ending where their window would come within
+   * half a window of that wave's line ({@link #clearOf}).
+   */
   static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
-      double sEnd) {
+      double sEnd, double @org.jspecify.annotations.Nullable [] stop) {
     double a = scan.angle(idx);
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
     double s1 = Math.min(sEnd, scan.reach[i] - 2);
-    if (s1 - s0 < 40) {
+    if (s1 - s0 < MIN_LINE_PX) {
       return null;
     }
     double ux = Math.cos(a);
@@ -358,10 +383,38 @@ public final class WaveDetector {
     Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
     int minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
     Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+    // a wave may end well before its ray leaves the flow (a double ramp's first shock at the
+    // second, a shock at a fan): then its profiles are too few a share of the ray's, and beyond
+    // its end the window takes in whatever crosses the ray there; the ray is halved until the
+    // wave is measured or too short to be
+    boolean halved = false;
+    while (m == null && (s1 - s0) / 2 >= MIN_LINE_PX) {
+      s1 = s0 + (s1 - s0) / 2;
+      c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
+      minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
+      m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+      halved = true;
+    }
     if (m == null) {
       return null;
     }
     Measure.Candidate c2 = c.recentred(m.distortedFit());
+    if (stop != null) {
+      double last = clearOf(c2, stop, window);
+      if (last - s0 >= MIN_LINE_PX && last < c2.s1()) {
+        c2 = new Measure.Candidate(c2.ox(), c2.oy(), c2.ux(), c2.uy(), s0, last);
+      }
+    }
+    if (halved) {
+      // and the second pass stops where the first found the wave's end
+      LineFit.Result f = m.distortedFit();
+      double end = (f.cx() + f.endAlong() * f.ux() - c2.ox()) * c2.ux() + (f.cy() + f.endAlong() * f.uy() - c2.oy()) * c2.uy();
+      double start = (f.cx() + f.startAlong() * f.ux() - c2.ox()) * c2.ux() + (f.cy() + f.startAlong() * f.uy() - c2.oy()) * c2.uy();
+      double last = Math.max(end, start);
+      if (last - s0 >= MIN_LINE_PX && last < c2.s1()) {
+        c2 = new Measure.Candidate(c2.ox(), c2.oy(), c2.ux(), c2.uy(), s0, last);
+      }
+    }
     return Measure.measure(ctx.full(), c2, sig, ctx.narrowSecondPass() ? secondWindow(sig, window, m.widthPx()) : window, m.sign(), ctx.noise(), ctx.undistort(),
         minSupport);
   }

@@ -101,6 +101,7 @@ class DetectorBenchmark {
     int falseShocksHighSnr = 0;
     int missedShocksHighSnr = 0;
     int opticsRight = 0;
+    Map<String, int[]> setApartCounts = new TreeMap<>();
     for (int i = 0; i < CASES; i++) {
       Case cs = caseOf(i);
       BodyShape shape = cs.shape();
@@ -132,26 +133,18 @@ class DetectorBenchmark {
       }
       boolean[] used = new boolean[found.size()];
       Map<String, Double> steps = densitySteps(shape, cs.mach(), roll);
+      List<ExpectedWave> apart = new ArrayList<>();
       for (ExpectedWave t : c.truth()) {
         String k = family(t.kind());
         double step = steps.getOrDefault(key(t), Double.NaN);
         if (k == null || (t.kind() == WaveKind.SLIP_LINE && !(Math.abs(step) >= VISIBLE_SLIP_STEP))) {
           continue;
         }
-        int best = -1;
-        double bestErr = Math.toRadians(1.5);
-        for (int j = 0; j < found.size(); j++) {
-          ObservedWave w = found.get(j);
-          if (used[j] || !k.equals(family(w.kind()))) {
-            continue;
-          }
-          double err = Math.abs(lineDiff(w.line().directionRad(), t.directionRad()));
-          double startGap = w.line().startPx().distanceTo(t.startPx());
-          if (err < bestErr && startGap < 120) {
-            bestErr = err;
-            best = j;
-          }
+        if (setApart(c, t) != null) {
+          apart.add(t);
+          continue;
         }
+        int best = match(t, k, found, used);
         int[] m = miss.computeIfAbsent(k, x -> new int[3]);
         m[0]++;
         if (best < 0) {
@@ -169,6 +162,20 @@ class DetectorBenchmark {
         ObservedWave w = found.get(best);
         rows.add(new Row(k, Math.toDegrees(lineDiff(w.line().directionRad(), t.directionRad())),
             Math.toDegrees(w.line().directionUncertaintyRad()), t.label(), cs));
+      }
+      // waves set apart are paired last, so that they take no detection from a counted wave; what
+      // is found on one is not false
+      for (ExpectedWave t : apart) {
+        String why = setApart(c, t);
+        int best = match(t, family(t.kind()), found, used);
+        if (best >= 0) {
+          used[best] = true;
+        }
+        int[] a = setApartCounts.computeIfAbsent(family(t.kind()) + " | " + why, x -> new int[2]);
+        a[0]++;
+        a[1] += best >= 0 ? 1 : 0;
+        System.out.printf("set apart (%s, own SNR %.2f): %s %s %s in %s%n", why, c.ownSnr(t), t.label(), fmtTruth(t),
+            best >= 0 ? "found" : "not found", cs);
       }
       for (int j = 0; j < found.size(); j++) {
         if (!used[j]) {
@@ -210,6 +217,10 @@ class DetectorBenchmark {
       System.out.printf("| %s | %d | %d | %.4f | %.4f | %d | %d | %.0f%% |%n", e.getKey(), e.getValue()[0], n,
           n == 0 ? Double.NaN : errs.get(n / 2), n == 0 ? Double.NaN : errs.get((int) Math.min(n - 1, Math.floor(0.9 * n))),
           e.getValue()[1], e.getValue()[2], n == 0 ? 0 : 100.0 * within / n);
+    }
+    System.out.println("| set apart: family | why | truth waves | found |");
+    for (var e : setApartCounts.entrySet()) {
+      System.out.printf("| %s | %d | %d |%n", e.getKey(), e.getValue()[0], e.getValue()[1]);
     }
     System.out.println("missed shocks at SNR >= 10: " + missedShocksHighSnr + ", false shocks at SNR >= 10: " + falseShocksHighSnr);
     System.out.println("optics guess (shadowgraph or schlieren) right on " + opticsRight + " of " + cases + " pictures");
@@ -336,6 +347,53 @@ class DetectorBenchmark {
         System.out.printf("sequence: 1 thread %.1f frames/s, 2 threads %.1f frames/s, ratio %.2f (target >= 1.7)%n", one, two, two / one);
       }
     }
+  }
+
+  /**
+   * A truth wave below {@value #FAINT_OWN_SNR} of its own signal-to-noise ratio per pixel
+   * ({@link RenderedCase#ownSnr}): fainter than the noise of one pixel. The double ramp's reflected
+   * wave carries a density step of 0.0001-0.002 of the freestream's against 0.8-0.9 across the
+   * merged shock the picture's SNR is set on; no detector should be asked to find it, and none is
+   * charged for what it finds on it. Our own rule, counted apart in the table, and for thin
+   * lines only (shocks, slip lines): a fan's signal is spread over its width, so a fan boundary
+   * with a peak below the noise can still be seen (the SNR-5 diamond fans are found) and always
+   * counts.
+   */
+  static final double FAINT_OWN_SNR = 1;
+
+  /**
+   * A truth segment shorter than this inside the frame cannot be measured by design: a
+   * secondary shock's profiles start {@link Secondary#SHORT_SKIP_PX} from its origin and need
+   * {@link Secondary#SHORT_MIN_LENGTH_PX} of line (a 22 px piece would give about 0.2° at best).
+   */
+  static final double TOO_SHORT_PX = Secondary.SHORT_SKIP_PX + Secondary.SHORT_MIN_LENGTH_PX;
+
+  /** Why a truth wave is set apart from the counted ones ("faint", "too short"), or null when it counts. */
+  static String setApart(RenderedCase c, ExpectedWave t) {
+    if (t.startPx().distanceTo(t.endPx()) < TOO_SHORT_PX) {
+      return "too short";
+    }
+    boolean thin = t.kind().isShock() || t.kind() == WaveKind.SLIP_LINE;
+    return thin && c.ownSnr(t) < FAINT_OWN_SNR ? "faint" : null;
+  }
+
+  /** The unused detection of family {@code k} closest in direction (within 1.5°, start within 120 px), or -1. */
+  static int match(ExpectedWave t, String k, List<ObservedWave> found, boolean[] used) {
+    int best = -1;
+    double bestErr = Math.toRadians(1.5);
+    for (int j = 0; j < found.size(); j++) {
+      ObservedWave w = found.get(j);
+      if (used[j] || !k.equals(family(w.kind()))) {
+        continue;
+      }
+      double err = Math.abs(lineDiff(w.line().directionRad(), t.directionRad()));
+      double startGap = w.line().startPx().distanceTo(t.startPx());
+      if (err < bestErr && startGap < 120) {
+        bestErr = err;
+        best = j;
+      }
+    }
+    return best;
   }
 
   static String family(WaveKind k) {

@@ -19,7 +19,7 @@ import java.util.Random;
  * the strongest shock is exactly the one asked for (the bench itself is rendered noiseless).
  */
 record RenderedCase(String name, GrayF32 frame, GrayU8 mask, Optics optics, BodyShape shape, double flowRad,
-    List<ExpectedWave> truth, double noiseSigma) {
+    List<ExpectedWave> truth, double noiseSigma, GrayF32 clean) {
 
   static RenderedCase of(String name, BodyShape shape, double mach, Optics optics, int edgeSign, double blurPx,
       double snr, double rollRad, int w, int h, long seed) {
@@ -49,13 +49,52 @@ record RenderedCase(String name, GrayF32 frame, GrayU8 mask, Optics optics, Body
       }
     }
     double sigma = Double.isInfinite(snr) ? 0 : shockAmplitude(norm, mask, f.pattern().expectedWaves(), maxAbs) / snr;
+    GrayF32 clean = norm.clone();
     Random rnd = new Random(seed * 31 + 7);
     for (int i = 0; i < w * h; i++) {
       if (mask.data[i] != 0) {
         norm.data[i] += (float) (sigma * rnd.nextGaussian());
       }
     }
-    return new RenderedCase(name, norm, mask, optics, shape, rollRad, f.pattern().expectedWaves(), sigma);
+    return new RenderedCase(name, norm, mask, optics, shape, rollRad, f.pattern().expectedWaves(), sigma, clean);
+  }
+
+  /**
+   * A truth wave's own signal-to-noise ratio per pixel: the median, along the wave, of the largest
+   * |clean frame| within 4 px across it, over the noise deviation (infinite on a clean picture).
+   * The picture's SNR is defined across its strongest shock; this is the same for one wave.
+   */
+  double ownSnr(ExpectedWave e) {
+    return noiseSigma > 0 ? lineSignal(clean, mask, e, 1) / noiseSigma : Double.POSITIVE_INFINITY;
+  }
+
+  /**
+   * The median along a truth line (15 px clear of its start) of the largest |frame| within 4 px
+   * across it; 0 with fewer than {@code minSamples} samples (every 2 px).
+   */
+  private static double lineSignal(GrayF32 norm, GrayU8 mask, ExpectedWave e, int minSamples) {
+    double len = e.startPx().distanceTo(e.endPx());
+    java.util.List<Double> v = new java.util.ArrayList<>();
+    double nx = -(e.endPx().y() - e.startPx().y()) / len;
+    double ny = (e.endPx().x() - e.startPx().x()) / len;
+    for (double s = 15; s < len - 5; s += 2) {
+      double x = e.startPx().x() + (e.endPx().x() - e.startPx().x()) * s / len;
+      double y = e.startPx().y() + (e.endPx().y() - e.startPx().y()) * s / len;
+      double m = 0;
+      for (double o = -4; o <= 4; o += 0.5) {
+        int ix = (int) Math.round(x + o * nx);
+        int iy = (int) Math.round(y + o * ny);
+        if (ix >= 0 && iy >= 0 && ix < norm.width && iy < norm.height && mask.get(ix, iy) != 0) {
+          m = Math.max(m, Math.abs(norm.get(ix, iy)));
+        }
+      }
+      v.add(m);
+    }
+    if (v.size() < minSamples) {
+      return 0;
+    }
+    java.util.Collections.sort(v);
+    return v.get(v.size() / 2);
   }
 
   /**
@@ -71,27 +110,7 @@ record RenderedCase(String name, GrayF32 frame, GrayU8 mask, Optics optics, Body
       if (anyShock ? !e.kind().isShock() : e.kind() != dev.wavemark.core.model.WaveKind.MACH_WAVE) {
         continue;
       }
-      double len = e.startPx().distanceTo(e.endPx());
-      java.util.List<Double> v = new java.util.ArrayList<>();
-      for (double s = 15; s < len - 5; s += 2) {
-        double x = e.startPx().x() + (e.endPx().x() - e.startPx().x()) * s / len;
-        double y = e.startPx().y() + (e.endPx().y() - e.startPx().y()) * s / len;
-        double m = 0;
-        double nx = -(e.endPx().y() - e.startPx().y()) / len;
-        double ny = (e.endPx().x() - e.startPx().x()) / len;
-        for (double o = -4; o <= 4; o += 0.5) {
-          int ix = (int) Math.round(x + o * nx);
-          int iy = (int) Math.round(y + o * ny);
-          if (ix >= 0 && iy >= 0 && ix < norm.width && iy < norm.height && mask.get(ix, iy) != 0) {
-            m = Math.max(m, Math.abs(norm.get(ix, iy)));
-          }
-        }
-        v.add(m);
-      }
-      if (v.size() > 10) {
-        java.util.Collections.sort(v);
-        best = Math.max(best, v.get(v.size() / 2));
-      }
+      best = Math.max(best, lineSignal(norm, mask, e, 11));
     }
     return best > 0 ? best : 0.1 * maxAbs;
   }

@@ -118,4 +118,26 @@ class SlipLineDetectionTest {
     assertTrue(c.truth().stream().anyMatch(e -> e.kind() == WaveKind.EXPANSION_HEAD && e.feature() == Feature.INTERSECTION));
     assertTrue(found(detect(c, c.truth()), WaveKind.REFLECTED_SHOCK).isEmpty());
   }
+
+  @Test
+  void theReflectedWavesSignTellsAShockFromAnExpansionWithoutTheory() {
+    // 10 + 12 deg ramps: the reflected wave is a weak shock at M 2.2 and a weak expansion at M 3
+    // (the same-family shock intersection, core.gas ShockIntersection). No hints: the sign of the
+    // line against the first ramp shock's decides, whichever side the knife edge is on.
+    Object[][] optics = {{Optics.SCHLIEREN_VERTICAL_EDGE, 1}, {Optics.SCHLIEREN_HORIZONTAL_EDGE, -1}, {Optics.SHADOWGRAPH, 1}};
+    for (Object[] oe : optics) {
+      Optics o = (Optics) oe[0];
+      int edge = (Integer) oe[1];
+      for (double mach : new double[] {2.2, 3.0}) {
+        RenderedCase c = RenderedCase.of("double-ramp", doubleRamp(10, 12), mach, o, edge, 1.0, Double.POSITIVE_INFINITY, 0, 1024, 768, 10);
+        boolean expands = c.truth().stream().anyMatch(e -> e.kind() == WaveKind.EXPANSION_HEAD && e.feature() == Feature.INTERSECTION);
+        assertEquals(mach > 2.5, expands, "the theory's reflected wave at M " + mach);
+        List<ObservedWave> ws = detect(c, List.of());
+        boolean shock = ws.stream().anyMatch(w -> w.kind() == WaveKind.REFLECTED_SHOCK);
+        boolean fan = ws.stream().anyMatch(w -> w.kind() == WaveKind.EXPANSION_HEAD && w.feature().equals(Optional.of(Feature.INTERSECTION)));
+        assertEquals(expands, fan, "reflected fan found at M " + mach + " in " + o + " edge " + edge);
+        assertEquals(!expands, shock, "reflected shock found at M " + mach + " in " + o + " edge " + edge);
+      }
+    }
+  }
 }
