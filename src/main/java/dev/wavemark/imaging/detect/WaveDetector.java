@@ -309,7 +309,12 @@ public final class WaveDetector {
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
       double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
-      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end);
+      // the side of the profiles' direction n = (-uy, ux) on which the other boundary, and so the
+      // fan, lies
+      double a = scan.angle(edges[i].index());
+      double b = scan.angle(edges[1 - i].index());
+      double side = -(-Math.sin(a)) * Math.cos(b) + Math.cos(a) * (-Math.sin(b));
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end, side >= 0 ? 1 : -1);
     }
     // the head is the boundary steeper to the freestream
     double[] steep = new double[2];
@@ -347,6 +352,17 @@ public final class WaveDetector {
   /** As {@link #measureAlong(Context, AngularScan, double, Signature, double, double)}, the profiles ending by {@code sEnd}. */
   static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
       double sEnd) {
+    return measureAlong(ctx, scan, idx, sig, window, s0, sEnd, 0);
+  }
+
+  /**
+   * As {@link #measureAlong(Context, AngularScan, double, Signature, double, double, double)},
+   * for a boundary of the centred fan at the scan's origin when {@code fanSide} is not 0 (see
+   * {@link Measure#measure(Raster, Measure.Candidate, Signature, double, int, double,
+   * java.util.function.UnaryOperator, int, int)}).
+   */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
+      double sEnd, int fanSide) {
     double a = scan.angle(idx);
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
     double s1 = Math.min(sEnd, scan.reach[i] - 2);
@@ -357,12 +373,12 @@ public final class WaveDetector {
     double uy = -Math.sin(a);
     Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
     int minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
-    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport, fanSide);
     if (m == null) {
       return null;
     }
     Measure.Candidate c2 = c.recentred(m.distortedFit());
     return Measure.measure(ctx.full(), c2, sig, ctx.narrowSecondPass() ? secondWindow(sig, window, m.widthPx()) : window, m.sign(), ctx.noise(), ctx.undistort(),
-        minSupport);
+        minSupport, fanSide);
   }
 }
