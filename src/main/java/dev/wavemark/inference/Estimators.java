@@ -134,12 +134,15 @@ final class Estimators {
 
   /**
    * Standard uncertainty of the error all fan boundaries of a frame share, 0.06 deg. Measured with
-   * the detector benchmark (DetectorBenchmark, 21 pictures with four fan boundaries each): the
-   * mean of a picture's boundary errors, in angle to the local flow, was -0.045 deg on average
-   * and 0.066 deg rms over the pictures, against 0.052 deg rms about that mean within a picture,
-   * so about 0.06 deg of each boundary's error is common to the picture. It is added on top of
-   * each boundary's own fit uncertainty (which the benchmark calibrated on the total error, so
-   * this errs on the safe side), and it keeps several fans from out-voting one shock by
+   * the detector benchmark (DetectorBenchmark#accuracy, which prints it as "fan bias"; 35 pictures
+   * with fans, 109 matched boundaries, one boundary more than 0.5 deg off left out): after the
+   * detector's correction of the 1/s pull on fan boundaries the mean of a picture's boundary
+   * errors, in angle to the local flow, is -0.017 deg on average (-0.067 deg before it) and
+   * 0.069 deg rms over the pictures, against 0.061 deg rms about that mean within a picture; with
+   * 3.1 boundaries a picture, sqrt(0.069^2 - 0.061^2 / 3.1) = 0.060 deg of each boundary's error
+   * is common to the picture (0.10 deg before the correction, on the same pictures). It is added on
+   * top of each boundary's own fit uncertainty (which the benchmark calibrated on the total error,
+   * so this errs on the safe side), and it keeps several fans from out-voting one shock by
    * averaging an error they share.
    */
   static final double FAN_LOCATOR_SIGMA_RAD = Math.toRadians(0.06);

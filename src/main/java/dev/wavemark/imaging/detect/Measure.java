@@ -55,6 +55,25 @@ final class Measure {
    */
   static Result measure(Raster full, Candidate c, Signature sig, double halfWindowPx, int fixedSign, double noise,
       UnaryOperator<Point2> undistort, int minSupport) {
+    return measure(full, c, sig, halfWindowPx, fixedSign, noise, undistort, minSupport, 0);
+  }
+
+  /**
+   * As {@link #measure(Raster, Candidate, Signature, double, int, double, UnaryOperator, int)},
+   * for a boundary of a centred expansion fan whose centre is the candidate's origin (so that s is
+   * the distance from the fan's centre) when {@code fanSide} is not 0. Each profile's centre is
+   * then corrected for what a centred fan does to it, both falling as 1/s and so turning the line:
+   * in schlieren (STEP) the pull of the fan side's slope on the box difference (see
+   * {@link Profiles.Kink}), its shape fitted once to the mean profile; in shadowgraph (PEAK) the
+   * shift of the thin line by half the ray displacement D on the fan's side, D being the area of
+   * the line (the light gathered into a caustic, or missing from a gap, is that of a band D wide),
+   * fitted as D = alpha / s over all profiles.
+   *
+   * @param fanSide +1 when the fan lies towards +n (n = (-uy, ux), the profiles' direction), -1
+   *     towards -n, 0 for any other wave
+   */
+  static Result measure(Raster full, Candidate c, Signature sig, double halfWindowPx, int fixedSign, double noise,
+      UnaryOperator<Point2> undistort, int minSupport, int fanSide) {
     int m = (int) Math.round(2 * halfWindowPx / SAMPLE_PX) + 1;
     int count = (int) Math.floor((c.s1() - c.s0()) / NORMAL_STEP_PX) + 1;
     if (count < minSupport) {
@@ -101,6 +120,28 @@ final class Measure {
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
     Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep);
+    int half = Math.max(2, m / 4);
+    Profiles.Kink kink = null;
+    // the 1/s the mean profile's kink stands for: its profiles' jumps fall as 1/s, so it is the
+    // mean of 1/s weighted by 1/s
+    double invRef = Double.NaN;
+    // the ray displacement on the fan's side as alpha / s, px
+    double alpha = Double.NaN;
+    if (fanSide != 0 && sig == Signature.STEP) {
+      kink = Profiles.kinkFit(mean, sign, fanSide, lo, hi, half);
+      double w1 = 0;
+      double w2 = 0;
+      for (int k = 0; k < prof.length; k++) {
+        if (prof[k] != null) {
+          double s = c.s0() + k * NORMAL_STEP_PX;
+          w1 += 1 / s;
+          w2 += 1 / (s * s);
+        }
+      }
+      invRef = w2 / w1;
+    } else if (fanSide != 0 && sig == Signature.PEAK) {
+      alpha = displacementScale(prof, c.s0());
+    }
     double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
     int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
     group = Math.max(1, Math.min(group, valid / Math.max(minSupport / 4, 1)));
@@ -125,8 +166,17 @@ final class Measure {
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
-      double o = l.centre() * SAMPLE_PX - halfWindowPx;
       double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
+      double centre = l.centre();
+      if (kink != null) {
+        double bias = Profiles.stepKinkBias(m, sign, fanSide, centre, kink.blur(), kink.slope() / (s * invRef), lo, hi, half);
+        centre -= Double.isFinite(bias) ? bias : 0;
+      } else if (Double.isFinite(alpha)) {
+        // the true boundary lies half the displacement from the line, towards the fan when light
+        // was gathered into it, away from the fan when it is a gap
+        centre += fanSide * 0.5 * alpha / s / SAMPLE_PX;
+      }
+      double o = centre * SAMPLE_PX - halfWindowPx;
       double px = c.ox() + s * c.ux() + o * nx;
       double py = c.oy() + s * c.uy() + o * ny;
       dx[n] = px;
@@ -156,6 +206,54 @@ final class Measure {
       return null;
     }
     return new Result(fit, distorted, ampSum / n, widthSum / n, sign);
+  }
+
+  /**
+   * The scale alpha of a shadowgraph fan boundary's ray displacement D = alpha / s (px), from the
+   * areas A of its profiles (each detrended over the window ends; see
+   * {@link #measure(Raster, Candidate, Signature, double, int, double, UnaryOperator, int, int)}):
+   * the least-squares fit of A = alpha / s, once over all profiles and once more over those whose
+   * A s lies within three median absolute deviations of the median, so that a stretch where
+   * another wave crosses the profiles does not set the correction of the whole boundary.
+   *
+   * @param s0 distance from the fan's centre of the first profile, px
+   */
+  static double displacementScale(double[][] prof, double s0) {
+    int n = 0;
+    double[] as = new double[prof.length];
+    double[] ss = new double[prof.length];
+    for (int k = 0; k < prof.length; k++) {
+      if (prof[k] != null) {
+        ss[n] = s0 + k * NORMAL_STEP_PX;
+        as[n] = Profiles.area(Profiles.detrend(prof[k], 3)) * SAMPLE_PX * ss[n];
+        n++;
+      }
+    }
+    if (n == 0) {
+      return Double.NaN;
+    }
+    double med = median(java.util.Arrays.copyOf(as, n));
+    double[] dev = new double[n];
+    for (int i = 0; i < n; i++) {
+      dev[i] = Math.abs(as[i] - med);
+    }
+    double mad = median(dev);
+    double num = 0;
+    double den = 0;
+    for (int i = 0; i < n; i++) {
+      if (dev[i] <= 3 * mad) {
+        // A = alpha / s with equal noise in A: weights 1 / s^2 on A s / s^2
+        num += as[i] / (ss[i] * ss[i]);
+        den += 1 / (ss[i] * ss[i]);
+      }
+    }
+    return den > 0 ? num / den : med;
+  }
+
+  private static double median(double[] v) {
+    java.util.Arrays.sort(v);
+    int n = v.length;
+    return n % 2 == 1 ? v[n / 2] : 0.5 * (v[n / 2 - 1] + v[n / 2]);
   }
 
   /** Means of consecutive runs of {@code g} profiles; a run with a missing profile is dropped. */

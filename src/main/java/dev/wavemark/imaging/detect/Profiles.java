@@ -130,6 +130,217 @@ final class Profiles {
   }
 
   /**
+   * A fan boundary's shape across it, fitted once to a boundary's mean profile. Inside a centred
+   * fan the schlieren signal is not flat: the density gradient changes from ray to ray, so at
+   * distance s from the fan's centre the level on the fan side of a boundary runs J (1 + kappa y / s)
+   * with y the distance into the fan, while outside the uniform flow gives a flat level. Blurred,
+   * that kink pulls the box difference's hump of {@link #step} towards the steeper side by an
+   * amount that falls as 1/s, which turns the fitted line; {@link #stepKinkBias} gives that pull
+   * for the shape found here so that it can be taken off each profile's centre.
+   *
+   * @param centre the kink's position in the mean profile, samples
+   * @param blur Gaussian sigma of the blur across the boundary, samples
+   * @param slope the fan side's slope over its jump (C / J), per sample
+   */
+  record Kink(double centre, double blur, double slope) {}
+
+  /**
+   * Least-squares fit of a blurred kinked step to a profile: a level and a slope common to both
+   * sides, a jump at x0 and a change of slope there on the fan's side, all blurred by a Gaussian
+   * of sigma b. The model is linear in its four levels, so only x0 and b are searched: x0 over
+   * 4 samples either side of the box-difference estimate of {@link #step} (half samples, then
+   * golden section), b over 0.6 to 10 samples in steps of 8 %.
+   *
+   * @param fanSide +1 when the fan lies towards higher indices, -1 towards lower
+   * @return null when no step is found or the fit is degenerate
+   */
+  static Kink kinkFit(double[] p, int sign, int fanSide, int lo, int hi, int half) {
+    Located box = step(p, sign, lo, hi, half);
+    if (box == null) {
+      return null;
+    }
+    double a = Math.max(lo, box.centre() - 4);
+    double b = Math.min(hi, box.centre() + 4);
+    double[] best = null;
+    double bestBlur = Double.NaN;
+    for (double blur = 0.6; blur <= 10.0 + 1e-9; blur *= 1.08) {
+      double[] f = bestKink(p, fanSide, box.centre(), a, b, blur);
+      if (f != null && (best == null || f[2] < best[2])) {
+        best = f;
+        bestBlur = blur;
+      }
+    }
+    if (best == null || !(sign * fanSide * best[1] > 0)) {
+      return null;
+    }
+    double[] coef = new double[4];
+    kinkCost(p, best[0], bestBlur, fanSide, coef);
+    return new Kink(best[0], bestBlur, coef[3] / coef[2]);
+  }
+
+  /**
+   * The pull of {@link #step} on a kinked step (see {@link Kink}): the box-difference centre of
+   * the noise-free model of {@code m} samples with its kink at {@code x0}, minus x0 (samples).
+   *
+   * @param slope the fan side's slope over its jump at this profile's distance, per sample
+   * @return the pull, or NaN when the model's step is not found
+   */
+  static double stepKinkBias(int m, int sign, int fanSide, double x0, double blur, double slope, int lo, int hi,
+      int half) {
+    double[] q = new double[m];
+    for (int i = 0; i < m; i++) {
+      double y = fanSide * (i - x0);
+      q[i] = sign * fanSide * kinkShape(y, blur, slope);
+    }
+    Located l = step(q, sign, lo, hi, half);
+    return l == null ? Double.NaN : l.centre() - x0;
+  }
+
+  /**
+   * The unit kinked step at distance y into the fan: H(y) (1 + slope y) blurred by a Gaussian of
+   * sigma b, which is Phi(y / b) + slope (y Phi(y / b) + b phi(y / b)).
+   */
+  static double kinkShape(double y, double blur, double slope) {
+    double z = y / blur;
+    double cdf = normalCdf(z);
+    return cdf + slope * (y * cdf + blur * Math.exp(-0.5 * z * z) / Math.sqrt(2 * Math.PI));
+  }
+
+  /** {position, jump, residual sum of squares} of the best kinked step with x0 in [a, b]. */
+  private static double[] bestKink(double[] p, int fanSide, double start, double a, double b, double blur) {
+    if (!(b > a)) {
+      return null;
+    }
+    double bestX = start;
+    double bestCost = kinkCost(p, start, blur, fanSide, null);
+    for (double x = a; x <= b + 1e-9; x += 0.5) {
+      double c = kinkCost(p, x, blur, fanSide, null);
+      if (c < bestCost) {
+        bestCost = c;
+        bestX = x;
+      }
+    }
+    double l = Math.max(a, bestX - 0.5);
+    double r = Math.min(b, bestX + 0.5);
+    double g = 0.5 * (Math.sqrt(5) - 1);
+    double x1 = r - g * (r - l);
+    double x2 = l + g * (r - l);
+    double f1 = kinkCost(p, x1, blur, fanSide, null);
+    double f2 = kinkCost(p, x2, blur, fanSide, null);
+    for (int it = 0; it < 24; it++) {
+      if (f1 < f2) {
+        r = x2;
+        x2 = x1;
+        f2 = f1;
+        x1 = r - g * (r - l);
+        f1 = kinkCost(p, x1, blur, fanSide, null);
+      } else {
+        l = x1;
+        x1 = x2;
+        f1 = f2;
+        x2 = l + g * (r - l);
+        f2 = kinkCost(p, x2, blur, fanSide, null);
+      }
+    }
+    double x = 0.5 * (l + r);
+    double[] coef = new double[4];
+    double cost = kinkCost(p, x, blur, fanSide, coef);
+    if (!(cost < Double.POSITIVE_INFINITY)) {
+      return null;
+    }
+    return new double[] {x, coef[2], cost};
+  }
+
+  /**
+   * Residual sum of squares of the least-squares kinked step at {@code x0}: the basis 1, i - x0,
+   * Phi(y / b) and the blurred ramp y Phi(y / b) + b phi(y / b), with y = fanSide (i - x0) the
+   * distance into the fan. {@code coef} receives the four coefficients when given.
+   */
+  private static double kinkCost(double[] p, double x0, double blur, int fanSide, double[] coef) {
+    double[] ata = new double[16];
+    double[] aty = new double[4];
+    double yy = 0;
+    double[] f = new double[4];
+    for (int i = 0; i < p.length; i++) {
+      double y = fanSide * (i - x0);
+      double z = y / blur;
+      double cdf = normalCdf(z);
+      f[0] = 1;
+      f[1] = i - x0;
+      f[2] = cdf;
+      f[3] = y * cdf + blur * Math.exp(-0.5 * z * z) / Math.sqrt(2 * Math.PI);
+      for (int r = 0; r < 4; r++) {
+        aty[r] += f[r] * p[i];
+        for (int c = 0; c <= r; c++) {
+          ata[4 * r + c] += f[r] * f[c];
+        }
+      }
+      yy += p[i] * p[i];
+    }
+    // Cholesky factor of the normal matrix (lower triangle), then the two triangular solves
+    double[] l = new double[16];
+    for (int r = 0; r < 4; r++) {
+      for (int c = 0; c <= r; c++) {
+        double v = ata[4 * r + c];
+        for (int k = 0; k < c; k++) {
+          v -= l[4 * r + k] * l[4 * c + k];
+        }
+        if (r == c) {
+          if (!(v > 1e-12 * (1 + ata[4 * r + r]))) {
+            return Double.POSITIVE_INFINITY;
+          }
+          l[4 * r + r] = Math.sqrt(v);
+        } else {
+          l[4 * r + c] = v / l[4 * c + c];
+        }
+      }
+    }
+    double[] w = new double[4];
+    for (int r = 0; r < 4; r++) {
+      double v = aty[r];
+      for (int k = 0; k < r; k++) {
+        v -= l[4 * r + k] * w[k];
+      }
+      w[r] = v / l[4 * r + r];
+    }
+    double explained = 0;
+    for (int r = 0; r < 4; r++) {
+      explained += w[r] * w[r];
+    }
+    if (coef != null) {
+      for (int r = 3; r >= 0; r--) {
+        double v = w[r];
+        for (int k = r + 1; k < 4; k++) {
+          v -= l[4 * k + r] * coef[k];
+        }
+        coef[r] = v / l[4 * r + r];
+      }
+    }
+    return yy - explained;
+  }
+
+  /**
+   * The standard normal distribution function, by Abramowitz and Stegun, Handbook of
+   * Mathematical Functions (1964), eq. 7.1.26 for erf (absolute error below 1.5e-7, from memory).
+   */
+  static double normalCdf(double z) {
+    double x = Math.abs(z) / Math.sqrt(2);
+    double t = 1 / (1 + 0.3275911 * x);
+    double poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
+    double erf = 1 - poly * Math.exp(-x * x);
+    return z >= 0 ? 0.5 * (1 + erf) : 0.5 * (1 - erf);
+  }
+
+  /** Sum of a profile's samples: its area in samples times the profile's units. */
+  static double area(double[] q) {
+    double a = 0;
+    for (double v : q) {
+      a += v;
+    }
+    return a;
+  }
+
+  /**
    * Zero crossing of a dark-bright (or bright-dark) pair in a detrended profile. A shadowgraph
    * shock is rarely symmetric (the light leaving a wide dark band piles up in a thin bright
    * caustic), so the crossing taken is the steepest sign change between the brightest and the

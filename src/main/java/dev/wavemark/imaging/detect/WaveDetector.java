@@ -309,7 +309,12 @@ public final class WaveDetector {
     Measure.Result[] ms = new Measure.Result[2];
     for (int i = 0; i < 2; i++) {
       double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
-      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end, null);
+      // the side of the profiles' direction n = (-uy, ux) on which the other boundary, and so the
+      // fan, lies
+      double a = scan.angle(edges[i].index());
+      double b = scan.angle(edges[1 - i].index());
+      double side = -(-Math.sin(a)) * Math.cos(b) + Math.cos(a) * (-Math.sin(b));
+      ms[i] = measureAlong(ctx, scan, edges[i].index(), sig, window, start, end, null, side >= 0 ? 1 : -1);
     }
     // the head is the boundary steeper to the freestream
     double[] steep = new double[2];
@@ -372,6 +377,17 @@ public final class WaveDetector {
    */
   static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
       double sEnd, double @org.jspecify.annotations.Nullable [] stop) {
+    return measureAlong(ctx, scan, idx, sig, window, s0, sEnd, stop, 0);
+  }
+
+  /**
+   * As {@link #measureAlong(Context, AngularScan, double, Signature, double, double, double, double[])},
+   * for a boundary of the centred fan at the scan's origin when {@code fanSide} is not 0 (see
+   * {@link Measure#measure(Raster, Measure.Candidate, Signature, double, int, double,
+   * java.util.function.UnaryOperator, int, int)}).
+   */
+  static Measure.Result measureAlong(Context ctx, AngularScan scan, double idx, Signature sig, double window, double s0,
+      double sEnd, double @org.jspecify.annotations.Nullable [] stop, int fanSide) {
     double a = scan.angle(idx);
     int i = (int) Math.max(0, Math.min(scan.reach.length - 1, Math.round(idx)));
     double s1 = Math.min(sEnd, scan.reach[i] - 2);
@@ -382,7 +398,7 @@ public final class WaveDetector {
     double uy = -Math.sin(a);
     Measure.Candidate c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
     int minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
-    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+    Measure.Result m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport, fanSide);
     // a wave may end well before its ray leaves the flow (a double ramp's first shock at the
     // second, a shock at a fan): then its profiles are too few a share of the ray's, and beyond
     // its end the window takes in whatever crosses the ray there; the ray is halved until the
@@ -392,7 +408,7 @@ public final class WaveDetector {
       s1 = s0 + (s1 - s0) / 2;
       c = new Measure.Candidate(scan.ox, scan.oy, ux, uy, s0, s1);
       minSupport = (int) Math.max(25, 0.2 * (s1 - s0));
-      m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport);
+      m = Measure.measure(ctx.full(), c, sig, window, 0, ctx.noise(), null, minSupport, fanSide);
       halved = true;
     }
     if (m == null) {
@@ -416,6 +432,6 @@ public final class WaveDetector {
       }
     }
     return Measure.measure(ctx.full(), c2, sig, ctx.narrowSecondPass() ? secondWindow(sig, window, m.widthPx()) : window, m.sign(), ctx.noise(), ctx.undistort(),
-        minSupport);
+        minSupport, fanSide);
   }
 }

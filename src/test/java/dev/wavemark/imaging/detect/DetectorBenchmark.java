@@ -40,7 +40,11 @@ class DetectorBenchmark {
         new BodyShape.TwinGenerators(new Point2(100.5, 150.2), new Point2(100.5, 620.7), d8, d8));
   }
 
-  record Row(String kind, double errDeg, double sigmaDeg, String label, Case c) {}
+  /**
+   * One matched wave: its direction error, and its error in acute angle to the local upstream
+   * flow (negative: the line reads too close to the flow direction).
+   */
+  record Row(String kind, double errDeg, double sigmaDeg, String label, Case c, double flowErrDeg) {}
 
   /**
    * With {@code -Dwavemark.bench.autoOptics=true} the accuracy table is detected with the optics
@@ -160,8 +164,9 @@ class DetectorBenchmark {
         }
         used[best] = true;
         ObservedWave w = found.get(best);
+        double flowErr = ImageAngles.acuteToFlow(w.line().directionRad(), t.localFlowDirectionRad()) - t.angleToFlowRad();
         rows.add(new Row(k, Math.toDegrees(lineDiff(w.line().directionRad(), t.directionRad())),
-            Math.toDegrees(w.line().directionUncertaintyRad()), t.label(), cs));
+            Math.toDegrees(w.line().directionUncertaintyRad()), t.label(), cs, Math.toDegrees(flowErr)));
       }
       // waves set apart are paired last, so that they take no detection from a counted wave; what
       // is found on one is not false
@@ -193,9 +198,9 @@ class DetectorBenchmark {
     }
     System.out.println("pictures " + cases + ", detection failures " + failed);
     // every matched wave, for a look at the worst ones: target/detector-accuracy.csv
-    StringBuilder csv = new StringBuilder("family,wave,error_deg,sigma_deg,case\n");
+    StringBuilder csv = new StringBuilder("family,wave,error_deg,sigma_deg,flow_error_deg,case\n");
     for (Row r : rows) {
-      csv.append(String.format("%s,%s,%.5f,%.5f,%s%n", r.kind(), r.label(), r.errDeg(), r.sigmaDeg(), r.c()));
+      csv.append(String.format("%s,%s,%.5f,%.5f,%.5f,%s%n", r.kind(), r.label(), r.errDeg(), r.sigmaDeg(), r.flowErrDeg(), r.c()));
     }
     try {
       java.nio.file.Files.writeString(java.nio.file.Path.of("target", "detector-accuracy.csv"), csv);
@@ -222,8 +227,44 @@ class DetectorBenchmark {
     for (var e : setApartCounts.entrySet()) {
       System.out.printf("| %s | %d | %d |%n", e.getKey(), e.getValue()[0], e.getValue()[1]);
     }
+    printFanBias(rows);
     System.out.println("missed shocks at SNR >= 10: " + missedShocksHighSnr + ", false shocks at SNR >= 10: " + falseShocksHighSnr);
     System.out.println("optics guess (shadowgraph or schlieren) right on " + opticsRight + " of " + cases + " pictures");
+  }
+
+  /**
+   * The error all fan boundaries of a picture share (the basis of the inference's fan-locator
+   * budget line): per picture, the mean of its matched fan boundaries' errors in angle to the local
+   * flow; then the mean and rms of those means over the pictures, and the rms of the boundaries
+   * about their own picture's mean. Printed for all pictures and for schlieren and shadowgraph apart.
+   */
+  static void printFanBias(List<Row> rows) {
+    for (String group : List.of("all", "schlieren", "shadowgraph")) {
+      Map<Integer, List<Double>> byCase = new TreeMap<>();
+      for (Row r : rows) {
+        boolean shadow = r.c().optics() == Optics.SHADOWGRAPH;
+        if (r.kind().startsWith("fan-") && (group.equals("all") || shadow == group.equals("shadowgraph"))) {
+          byCase.computeIfAbsent(r.c().index(), x -> new ArrayList<>()).add(r.flowErrDeg());
+        }
+      }
+      double sum = 0;
+      double sumSq = 0;
+      double within = 0;
+      int boundaries = 0;
+      for (List<Double> e : byCase.values()) {
+        double m = e.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
+        sum += m;
+        sumSq += m * m;
+        for (double x : e) {
+          within += (x - m) * (x - m);
+        }
+        boundaries += e.size();
+      }
+      int n = byCase.size();
+      System.out.printf("fan bias (%s): %d pictures, %d boundaries; picture mean %+.4f deg on average, %.4f deg rms over pictures; "
+          + "%.4f deg rms about the picture's mean%n", group, n, boundaries, sum / n, Math.sqrt(sumSq / n),
+          Math.sqrt(within / Math.max(1, boundaries - n)));
+    }
   }
 
   /**
