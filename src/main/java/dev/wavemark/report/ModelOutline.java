@@ -46,11 +46,11 @@ final class ModelOutline {
       Point2 side = normal(axis).times(c.chordPx() * Math.tan(c.halfAngleRad()));
       out.add(List.of(base.plus(side), apex, base.minus(side), base.plus(side)));
     } else if (shape instanceof BodyShape.Ramp r) {
-      out.add(wallTurning(r.wall(), r.cornerPx(), r.deflectionRad(), reach));
+      out.add(wallTurning(r.wall(), r.cornerPx(), r.deflectionRad(), flowRad, reach));
     } else if (shape instanceof BodyShape.ExpansionCorner e) {
-      out.add(wallTurning(e.wall(), e.cornerPx(), -e.deflectionRad(), reach));
+      out.add(wallTurning(e.wall(), e.cornerPx(), -e.deflectionRad(), flowRad, reach));
     } else if (shape instanceof BodyShape.DoubleRamp d) {
-      double dir = ImageAngles.direction(upstreamPoint(d.wall(), d.cornerPx()), d.cornerPx());
+      double dir = downstream(d.wall(), flowRad);
       int s = awayFromSolid(d.wall());
       out.add(List.of(at(d.cornerPx(), dir + Math.PI, reach), d.cornerPx(), d.secondCornerPx(),
           at(d.secondCornerPx(), dir + s * (d.deflectionRad() + d.secondDeflectionRad()), reach)));
@@ -74,14 +74,19 @@ final class ModelOutline {
   }
 
   /** The upstream wall up to the corner, then the surface turned by {@code turnRad} away from the solid. */
-  private static List<Point2> wallTurning(BodyShape.Wall wall, Point2 corner, double turnRad, double reach) {
-    double dir = ImageAngles.direction(upstreamPoint(wall, corner), corner);
+  private static List<Point2> wallTurning(BodyShape.Wall wall, Point2 corner, double turnRad, double flowRad, double reach) {
+    double dir = downstream(wall, flowRad);
     return List.of(at(corner, dir + Math.PI, reach), corner, at(corner, dir + awayFromSolid(wall) * turnRad, reach));
   }
 
   /** The wall point farther from the corner: the contract puts both upstream of it. */
-  private static Point2 upstreamPoint(BodyShape.Wall wall, Point2 corner) {
-    return wall.a().distanceTo(corner) >= wall.b().distanceTo(corner) ? wall.a() : wall.b();
+  /**
+   * The wall's direction that runs with the freestream (the wall's end farther from the corner
+   * need not be its upstream end: a corner near the window's upstream edge has it downstream).
+   */
+  private static double downstream(BodyShape.Wall wall, double flowRad) {
+    double d = ImageAngles.direction(wall.a(), wall.b());
+    return Math.cos(d - flowRad) >= 0 ? d : d + Math.PI;
   }
 
   private static List<Point2> wallLine(BodyShape.Wall w, double reach) {
