@@ -58,7 +58,8 @@ final class Charts {
 
   /**
    * The charts for a result: the oblique-shock diagram with the plane oblique shocks of the
-   * {@code shown} frames, and, for a sequence, Mach number against frame.
+   * {@code shown} frames (left out, with a note, when there is none), and, for a sequence, Mach
+   * number against frame.
    */
   static Inputs forResult(ResultFile r, List<Integer> shown) {
     double gamma = r.settings() == null ? 1.4 : r.settings().gamma();
@@ -81,9 +82,10 @@ final class Charts {
       }
     }
     Double inferred = r.summary().mach() == null ? null : r.summary().mach().value();
-    String tb = thetaBetaMach(pts, gamma, inferred, r.summary().nominalMach(), "tbm");
+    // with no measured point the diagram would show theory only (a blunt body, a cone, Mach waves)
+    String tb = pts.isEmpty() ? null : thetaBetaMach(pts, gamma, inferred, r.summary().nominalMach(), "tbm");
     String note = pts.isEmpty()
-        ? "No plane oblique shock with a known deflection was measured in the pictured frames, so the chart shows theory only."
+        ? "No plane oblique shock with a known deflection was measured in the pictured frames, so the oblique-shock diagram is left out."
         : "Error bars are one standard uncertainty; at this scale they are often smaller than the marker.";
     String mach = seq.size() > 1
         ? machSequence(seq, r.summary().nominalMach(), r.summary().machTolerance(), inferred, "seq") : null;

@@ -14,7 +14,7 @@ import org.jspecify.annotations.Nullable;
  * @param summary key facts of the run, in order
  * @param checks the tunnel check lines
  * @param settings the run's settings, in order
- * @param thetaBetaSvg the theta-beta-M chart as an SVG element, or null when no shock can be placed on it
+ * @param thetaBetaSvg the theta-beta-M chart as an SVG element, or null when no shock can be placed on it (the note then says so)
  * @param machSvg Mach number against frame (sequences only), or null
  * @param frames the annotated frames
  * @param frameRows the frame table (bounded)

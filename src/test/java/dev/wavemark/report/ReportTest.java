@@ -60,6 +60,19 @@ class ReportTest {
   }
 
   @Test
+  void theObliqueShockDiagramIsLeftOutWhenNoPlaneShockWasMeasured() throws Exception {
+    ResultFile.Frame f = Fixtures.frame(0, Fixtures.MACH, "frame-0001.png");
+    ResultFile.Frame bare = new ResultFile.Frame(f.index(), f.file(), List.of(), f.mach(), f.reflection(), f.warnings(), f.error(),
+        f.budget(), f.predicted(), f.tunnel());
+    ResultFile base = Fixtures.result("bow shock only", List.of(bare));
+    String page = Files.readString(Report.write(new Report.Input(base, Fixtures.WEDGE, 0, Map.of(), null), dir));
+    assertTrue(page.contains("the oblique-shock diagram is left out"), "the page says why the diagram is missing");
+    assertFalse(page.contains("<b>Oblique-shock diagram.</b>"), "no diagram of theory alone");
+    String withShocks = Files.readString(Report.write(new Report.Input(Fixtures.result("wedge", List.of(f)), Fixtures.WEDGE, 0, Map.of(), null), dir));
+    assertTrue(withShocks.contains("<b>Oblique-shock diagram.</b>"), "measured shocks get the diagram");
+  }
+
+  @Test
   void aSlipLineCheckIsTabulatedAndWrittenToTheResult() throws Exception {
     // a double ramp (8 + 8 deg at M 3): theory's slip line from the core's same-family
     // intersection, the measured line turned 0.4 deg from it with a 0.05 deg uncertainty
