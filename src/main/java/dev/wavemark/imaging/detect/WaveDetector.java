@@ -245,6 +245,26 @@ public final class WaveDetector {
   }
 
   /**
+   * The bands a fan's boundaries stop at: a shock whose fitted segment (with its margin) ends
+   * inside the fan's sector, seen from the fan's origin, ended there because it met this fan (a
+   * generator's reflected shock fades where the shoulder fan's head crosses it) and goes on,
+   * bending, through the fan, so the tail stops at its line as well as the head; such a band's
+   * fitted end is taken as unbounded. Other bands are kept as they are.
+   */
+  static List<ShockBand> throughFan(List<ShockBand> bands, Point2 origin, double a0, double a1) {
+    List<ShockBand> out = new ArrayList<>(bands.size());
+    double span = ImageAngles.wrap(a1 - a0);
+    for (ShockBand b : bands) {
+      double ex = b.cx() + b.fittedEnd() * b.ux();
+      double ey = b.cy() + b.fittedEnd() * b.uy();
+      double rel = ImageAngles.wrap(ImageAngles.direction(ex - origin.x(), ey - origin.y()) - a0);
+      boolean inside = Double.isFinite(b.fittedEnd()) && span != 0 && rel / span >= 0 && rel / span <= 1;
+      out.add(inside ? new ShockBand(b.cx(), b.cy(), b.ux(), b.uy(), b.from(), b.to(), b.halfWidth(), Double.POSITIVE_INFINITY) : b);
+    }
+    return out;
+  }
+
+  /**
    * A measured shock's band: its fitted line (centre and unit direction, distorted picture
    * pixels), the stretch along it from {@code from} to {@code to} and {@code halfWidth} either
    * side that a fan's pencil leaves out, and where its fitted segment ends (plus a margin), at
@@ -307,8 +327,9 @@ public final class WaveDetector {
     double start = Math.max(ORIGIN_SKIP_PX, FAN_SKIP_WINDOWS * window / Math.max(spread, 1e-3));
     Signature sig = ctx.shadow() ? Signature.PEAK : Signature.STEP;
     Measure.Result[] ms = new Measure.Result[2];
+    List<ShockBand> stops = throughFan(avoid, s.origin(), scan.angle(edges[0].index()), scan.angle(edges[1].index()));
     for (int i = 0; i < 2; i++) {
-      double end = stopAt(s, scan.angle(edges[i].index()), avoid, start, window);
+      double end = stopAt(s, scan.angle(edges[i].index()), stops, start, window);
       // the side of the profiles' direction n = (-uy, ux) on which the other boundary, and so the
       // fan, lies
       double a = scan.angle(edges[i].index());

@@ -44,12 +44,11 @@ public final class SynthImages {
 
   /** Writes frames as one multi-page, Deflate-compressed 16-bit TIFF. */
   public static void writeTiff(List<GrayU16> frames, Path file) {
-    try (PageWriter w = PageWriter.open("tiff", file, "ZLib")) {
-      for (GrayU16 f : frames) {
-        w.add(ConvertBufferedImage.convertTo(f, null));
-      }
-      w.commit();
+    List<BufferedImage> pages = new java.util.ArrayList<>(frames.size());
+    for (GrayU16 f : frames) {
+      pages.add(ConvertBufferedImage.convertTo(f, null));
     }
+    writeWith("tiff", pages, file, "ZLib");
   }
 
   /**
