@@ -13,6 +13,7 @@ import dev.wavemark.files.ResultFrames;
 import dev.wavemark.imaging.calib.LensCorrection;
 import dev.wavemark.imaging.detect.DetectionRequest;
 import dev.wavemark.imaging.detect.FlowRegion;
+import dev.wavemark.imaging.detect.OpticsGuess;
 import dev.wavemark.imaging.detect.WaveDetector;
 import dev.wavemark.imaging.io.FlowMask;
 import dev.wavemark.imaging.io.Frame;
@@ -39,7 +40,7 @@ final class StandardAnalyser implements FrameAnalyser {
   private final Map<Long, Setup> setups = new ConcurrentHashMap<>();
 
   private record Setup(FlowMask mask, Normalizer normalizer, Optional<UnaryOperator<Point2>> undistort, List<ExpectedWave> hints,
-      Optics optics) {}
+      Optics optics, Optional<OpticsGuess> guess) {}
 
   StandardAnalyser(RunSpec spec, FrameSequence seq) {
     this.spec = spec;
@@ -56,16 +57,21 @@ final class StandardAnalyser implements FrameAnalyser {
     List<ObservedWave> observed = detector.detect(req);
     FrameInference inf = Inference.ofFrame(spec, observed, img.width, img.height);
     ResultFile.Frame entry = ResultFrames.analysed(frame.index(), frame.ref().label(), observed, inf, spec);
-    if (spec.optics() == Optics.AUTO && s.optics() != Optics.AUTO) {
-      entry = ResultFrames.withWarning(entry, guessed(s.optics()));
+    if (s.guess().isPresent() && s.optics() != Optics.AUTO) {
+      entry = ResultFrames.withWarning(entry, guessed(s.guess().get()));
     }
     return new Analysed(entry, Optional.of(inf));
   }
 
-  private static String guessed(Optics o) {
-    return "[optics-guessed] the run file gives no optics; the pictures were taken for "
-        + (o == Optics.SHADOWGRAPH ? "shadowgraph" : "schlieren")
-        + " (the guess is weak, and takes most shadowgraphs for schlieren: give optics in the run file)";
+  private static String guessed(OpticsGuess g) {
+    String taken = "[optics-guessed] the run file gives no optics; the pictures were taken for "
+        + (g.optics() == Optics.SHADOWGRAPH ? "shadowgraph" : "schlieren");
+    return g.fromLines()
+        ? taken + " from the net light across " + g.lines() + " shock line" + (g.lines() == 1 ? "" : "s") + " of the first frame"
+            + " (net fraction " + String.format(java.util.Locale.ROOT, "%.2f", g.netFraction())
+            + "; about 0 in shadowgraph, 1 in schlieren): give optics in the run file to be sure"
+        : taken + " on a weak test (no shock line found in the first frame to judge by; it takes most shadowgraphs"
+            + " for schlieren): give optics in the run file";
   }
 
   private Setup setup(GrayF32 first) {
@@ -85,8 +91,12 @@ final class StandardAnalyser implements FrameAnalyser {
       }
     }
     // one guess for the run's frames of this size, from the first, when the run file does not say
-    Optics optics = spec.optics() == Optics.AUTO
-        ? WaveDetector.guessOptics(n.apply(first), FlowRegion.of(mask.pixels())) : spec.optics();
-    return new Setup(mask, n, und, hints, optics);
+    // the guess weighs each line's net light, which flattening a frame without a reference takes away
+    Normalizer forGuess = reference.isPresent() ? n : Normalizer.againstMedian(mask);
+    Optional<OpticsGuess> guess = spec.optics() == Optics.AUTO
+        ? Optional.of(WaveDetector.guessOptics(forGuess.apply(first), FlowRegion.of(mask.pixels()), spec.model(),
+            spec.calibration().flowDirectionRad()))
+        : Optional.empty();
+    return new Setup(mask, n, und, hints, guess.map(OpticsGuess::optics).orElse(spec.optics()), guess);
   }
 }

@@ -80,11 +80,12 @@ final class Frames {
   }
 
   /**
-   * Shadowgraph or schlieren, from the picture: in shadowgraph every wave is a dark-bright pair,
-   * so the reduced frame's strongest excursions have partners of the other sign right next to
-   * them. Compares the mean product of the strongest pixels' neighbours along both axes.
+   * The fallback of {@link OpticsGuess} when no shock line is found to judge by: in shadowgraph
+   * every wave is a dark-bright pair, so the reduced frame's strongest excursions should have
+   * partners of the other sign right next to them. A weak test: it takes most shadowgraphs of the
+   * detector benchmark for schlieren.
    */
-  static Optics guessOptics(Raster low) {
+  static Optics pairingGuess(Raster low) {
     int w = low.width;
     double[] mags = new double[low.data.length];
     int n = 0;

@@ -57,16 +57,20 @@ public final class WaveDetector {
   }
 
   /**
-   * What the picture looks like, shadowgraph or schlieren: the guess {@link #detect} makes for
-   * {@link Optics#AUTO}, for a caller that wants one answer for a whole run. {@link Optics#AUTO}
-   * when the region leaves nothing to judge by.
+   * What the picture looks like, shadowgraph or schlieren (see {@link OpticsGuess}): the guess
+   * {@link #detect} makes for {@link Optics#AUTO}, for a caller that wants one answer for a whole
+   * run. Its optics is {@link Optics#AUTO} when the region leaves nothing to judge by.
+   *
+   * @param frame the normalised frame, as for {@link DetectionRequest#frame()}
+   * @param shape the model geometry, whose shock searches give the lines judged
+   * @param flowDirectionRad the freestream direction in the image (files-contract sense)
    */
-  public static Optics guessOptics(GrayF32 frame, FlowRegion region) {
+  public static OpticsGuess guessOptics(GrayF32 frame, FlowRegion region, BodyShape shape, double flowDirectionRad) {
     Raster full = Raster.of(frame, region).eroded(EDGE_MARGIN_PX);
     if (full.flowCount() < 100) {
-      return Optics.AUTO;
+      return new OpticsGuess(Optics.AUTO, 0, Double.NaN);
     }
-    return Frames.guessOptics(full.reduced(reduction(full)));
+    return OpticsGuess.of(full, full.reduced(reduction(full)), shape, flowDirectionRad);
   }
 
   /** The detector with its default settings. */
@@ -91,7 +95,7 @@ public final class WaveDetector {
     Frames.validateRegion(full, req.region(), label);
     Raster low = full.reduced(reduction(full));
     double noise = Frames.noise(full);
-    Optics optics = req.optics() == Optics.AUTO ? Frames.guessOptics(low) : req.optics();
+    Optics optics = req.optics() == Optics.AUTO ? OpticsGuess.of(full, low, req.shape(), req.flowDirectionRad()).optics() : req.optics();
     UnaryOperator<Point2> und = req.undistort().orElse(null);
     // a shock generator's triple-point test (Secondary) reads where the incident fit ends, which
     // it was set for with the full-width second pass; the narrow pass is kept for the others

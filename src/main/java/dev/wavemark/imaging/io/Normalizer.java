@@ -44,6 +44,43 @@ public interface Normalizer {
     return new Flatten(mask, scalePx);
   }
 
+  /**
+   * Without a reference and without flattening: I / median - 1 inside the mask. The illumination's
+   * slow variation stays in the result, but so does each wave's net light, which a background
+   * estimate at a scale of a few line widths takes away (it subtracts the line's own blur); for
+   * measures at the scale of one line, such as the optics guess, that keep a straight baseline.
+   */
+  static Normalizer againstMedian(FlowMask mask) {
+    return new Level(mask);
+  }
+
+  /** See {@link #againstMedian}. */
+  final class Level implements Normalizer {
+    private final FlowMask mask;
+    private final float[] valid;
+
+    Level(FlowMask mask) {
+      this.mask = mask;
+      valid = new float[mask.width() * mask.height()];
+      for (int i = 0; i < valid.length; i++) {
+        valid[i] = mask.pixels().data[i] != 0 ? 1f : 0f;
+      }
+    }
+
+    @Override
+    public GrayF32 apply(GrayF32 frame) {
+      check(frame, mask.width(), mask.height());
+      int w = mask.width();
+      GrayF32 out = new GrayF32(w, mask.height());
+      for (int y = 0; y < mask.height(); y++) {
+        for (int x = 0; x < w; x++) {
+          out.data[y * w + x] = valid[y * w + x] != 0f ? frame.unsafe_get(x, y) : 0f;
+        }
+      }
+      return recentre(out, mask, valid);
+    }
+  }
+
   /** The reference's ratio when there is one, else the flattening at a twentieth of the picture width. */
   static Normalizer of(java.util.Optional<GrayF32> reference, FlowMask mask) {
     return reference.map(r -> againstReference(r, mask))

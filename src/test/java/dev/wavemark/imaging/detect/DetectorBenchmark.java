@@ -120,9 +120,10 @@ class DetectorBenchmark {
         continue;
       }
       cases++;
-      Raster low = Raster.of(c.frame(), FlowRegion.of(c.mask())).eroded(WaveDetector.EDGE_MARGIN_PX).reduced(2);
-      boolean guessShadow = Frames.guessOptics(low) == Optics.SHADOWGRAPH;
-      if (guessShadow == (o == Optics.SHADOWGRAPH)) {
+      OpticsGuess guess = WaveDetector.guessOptics(c.frame(), FlowRegion.of(c.mask()), shape, roll);
+      System.out.printf("optics guess %s from %d lines, net fraction %.3f: %s%n", guess.optics().contractName(), guess.lines(),
+          guess.netFraction(), cs);
+      if ((guess.optics() == Optics.SHADOWGRAPH) == (o == Optics.SHADOWGRAPH)) {
         opticsRight++;
       } else {
         System.out.println("optics guessed wrong: " + cs);

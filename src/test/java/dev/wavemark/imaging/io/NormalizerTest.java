@@ -51,6 +51,37 @@ class NormalizerTest {
     }
   }
 
+  /**
+   * Under an even illumination, I / median - 1 is the relative change itself, net light and all;
+   * flattening at 15 px takes a line's own blur off its background, and so the net light within
+   * 12 px of the band falls by about the share of a Gaussian within 0.8 sigma of its centre (0.58).
+   */
+  @Test
+  void againstTheMedianKeepsTheNetLightThatFlatteningTakesAway() {
+    FlowMask mask = FlowMask.build(W, H, Optional.of(WINDOW), List.of(), Optional.empty(), 0);
+    GrayF32 even = new GrayF32(W, H);
+    for (int y = 0; y < H; y++) {
+      for (int x = 0; x < W; x++) {
+        even.set(x, y, (float) ((WINDOW.contains(x, y) ? 2000 : 20) * (1 + signal(x, y))));
+      }
+    }
+    GrayF32 level = Normalizer.againstMedian(mask).apply(even);
+    GrayF32 flat = Normalizer.againstIllumination(mask, 15).apply(even);
+    double band = 0;
+    double flatNet = 0;
+    for (int y = 0; y < H; y++) {
+      for (int x = 0; x < W; x++) {
+        double expect = mask.inside(x, y) ? signal(x, y) : 0;
+        assertEquals(expect, level.get(x, y), 1e-5, "at " + x + "," + y);
+        if (Math.hypot(x - 100, y - 75) < 40 && Math.abs(y - (0.5 * x + 20)) < 12) {
+          band += level.get(x, y);
+          flatNet += flat.get(x, y);
+        }
+      }
+    }
+    assertTrue(band > 0 && flatNet < 0.7 * band, "net light within 12 px: " + band + " kept, " + flatNet + " after flattening");
+  }
+
   @Test
   void flatteningRemovesVignettingAndKeepsTheBand() {
     FlowMask mask = FlowMask.build(W, H, Optional.of(WINDOW), List.of(), Optional.empty(), 0);
