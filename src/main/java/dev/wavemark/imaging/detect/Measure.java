@@ -41,7 +41,7 @@ final class Measure {
    *     finding where other waves meet this one in the frame)
    * @param amplitude mean signed signature amplitude (frame units)
    * @param widthPx mean apparent width across the line
-   * @param sign the sign used (PEAK/STEP) or the polarity (DIPOLE)
+   * @param sign the sign used (PEAK/STEP), the polarity (DIPOLE) or the side of the tail (ROOT_SPIKE, ROOT_PAIR)
    */
   record Result(LineFit.Result fit, LineFit.Result distortedFit, double amplitude, double widthPx, int sign) {}
 
@@ -90,9 +90,22 @@ final class Measure {
     for (int j = 0; j < m; j++) {
       mean[j] /= valid;
     }
-    int sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
     int lo = m / 6;
     int hi = m - 1 - m / 6;
+    int sign;
+    // a cone's smear (shock thickness and blur) and the side its tail lies on are read from the
+    // mean profile, whose noise is that of one profile over the number of them
+    double smear = Double.NaN;
+    if (sig.onset()) {
+      SqrtRise.Fit f = SqrtRise.fitSmear(mean, order(sig), SAMPLE_PX, lo, hi, fixedSign);
+      if (f == null) {
+        return null;
+      }
+      smear = f.sigma();
+      sign = f.tail();
+    } else {
+      sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
+    }
     int maxSep = (int) Math.round(1.4 * halfWindowPx / SAMPLE_PX);
     // the noise of a located signature: the raw noise for lines and pairs; for steps, that of the
     // difference of two means over a quarter of the profile (a quarter window, in px, of
@@ -100,7 +113,7 @@ final class Measure {
     double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
-    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep);
+    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, smear);
     double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
     int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
     group = Math.max(1, Math.min(group, valid / Math.max(minSupport / 4, 1)));
@@ -121,7 +134,7 @@ final class Measure {
       if (prof[k] == null) {
         continue;
       }
-      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep);
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, smear);
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
@@ -188,12 +201,22 @@ final class Measure {
     return out;
   }
 
-  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep) {
+  /**
+   * The centre of one profile.
+   *
+   * @param smear the smear of a cone's shock, samples (ROOT_SPIKE, ROOT_PAIR; ignored otherwise)
+   */
+  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep, double smear) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));
       case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
+      case ROOT_SPIKE, ROOT_PAIR -> SqrtRise.locate(p, order(sig), sign, smear, lo, hi);
     };
+  }
+
+  private static SqrtRise.Order order(Signature sig) {
+    return sig == Signature.ROOT_PAIR ? SqrtRise.Order.CURVATURE : SqrtRise.Order.GRADIENT;
   }
 
   /** The sign of the mean profile's signature: the sign of its largest excursion. */
@@ -201,7 +224,7 @@ final class Measure {
     double[] q = switch (sig) {
       case PEAK -> Profiles.detrend(mean, 3);
       case STEP -> Profiles.detrend(Profiles.derivative(mean), 3);
-      case DIPOLE -> Profiles.detrend(mean, 3);
+      case DIPOLE, ROOT_SPIKE, ROOT_PAIR -> Profiles.detrend(mean, 3);
     };
     if (sig == Signature.DIPOLE) {
       Profiles.Located l = Profiles.zeroCrossing(q, 0, q.length - 1, q.length);

@@ -1,0 +1,310 @@
+package dev.wavemark.imaging.detect;
+
+/**
+ * The onset of a rise that grows as the square root of the distance behind a line, smeared by a
+ * Gaussian: how a conical shock looks side-on. The line-of-sight integral of the density excess
+ * behind a cone's shock is, near the shock's silhouette, the jump times the chord through the
+ * shock's circle, 2 sqrt(2 R d) at a distance d inside a circle of radius R (plane geometry); so
+ * the projected density rises as sqrt(d) from the shock on, the knife edge shows its gradient (a
+ * spike with a 1/sqrt(d) tail) and the shadowgraph its second derivative (a dark spike at the
+ * onset with a bright d^(-3/2) tail). Neither is symmetric about the shock, so a peak's or a
+ * zero crossing's position stands pixels behind the shock and moves along it as R grows; the
+ * onset of a fitted template does not.
+ *
+ * <p>With S(x) = integral over t > 0 of sqrt(t) g(x - t) dt for the unit normal density g, the
+ * substitution t = u^2 gives S'(x) = integral over u > 0 of g(x - u^2) du and S''(x) = integral
+ * over u > 0 of g'(x - u^2) du, smooth integrands tabulated once; for a smear sigma, the
+ * profiles are sigma^(-1/2) S'(x / sigma) and sigma^(-3/2) S''(x / sigma). Far behind the onset
+ * S'(x) tends to 1 / (2 sqrt x) and S''(x) to -1 / (4 x^(3/2)).
+ */
+final class SqrtRise {
+  private SqrtRise() {}
+
+  /** Which derivative of the rise the picture shows. */
+  enum Order {
+    /** Knife-edge schlieren: the gradient, a spike with a 1/sqrt tail. */
+    GRADIENT,
+    /** Shadowgraph: the second derivative, a spike at the onset of the other sign with a long tail. */
+    CURVATURE
+  }
+
+  /** Table range and step, in units of the smear. */
+  private static final double Z_MIN = -9;
+  private static final double Z_MAX = 64;
+  private static final double DZ = 0.01;
+  private static final float[] GRADIENT = table(false);
+  private static final float[] CURVATURE = table(true);
+  private static final float[] RISE = riseTable();
+  /** Whether the d^(3/2) term of the rise is fitted too. */
+  static boolean SECOND_TERM = Boolean.parseBoolean(System.getProperty("sqrtrise.second", "true"));
+
+  /** Smears tried when fitting one, px: from below the sampling to past any blur the detector handles. */
+  static final double MIN_SIGMA_PX = 0.4;
+  static final double MAX_SIGMA_PX = 6.0;
+  static final double SIGMA_STEP_PX = 0.1;
+
+  /** The unit-smear profile of the given order at z (distance behind the onset over the smear). */
+  static double unit(Order order, double z) {
+    if (z <= Z_MIN) {
+      return 0;
+    }
+    if (z >= Z_MAX) {
+      // the next term of the expansion of the smeared power law, relative 3/8 z^-2 and 15/8 z^-2
+      return order == Order.GRADIENT ? 0.5 / Math.sqrt(z) * (1 + 0.375 / (z * z))
+          : -0.25 / (z * Math.sqrt(z)) * (1 + 1.875 / (z * z));
+    }
+    float[] t = order == Order.GRADIENT ? GRADIENT : CURVATURE;
+    double pos = (z - Z_MIN) / DZ;
+    int i = (int) pos;
+    double f = pos - i;
+    return t[i] * (1 - f) + t[i + 1] * f;
+  }
+
+  /** S(z) = integral over u > 0 of 2 u^2 g(z - u^2) du, the smeared rise itself. */
+  static double rise(double z) {
+    if (z <= Z_MIN) {
+      return 0;
+    }
+    if (z >= Z_MAX) {
+      return Math.sqrt(z) * (1 - 0.125 / (z * z));
+    }
+    double pos = (z - Z_MIN) / DZ;
+    int i = (int) pos;
+    double f = pos - i;
+    return RISE[i] * (1 - f) + RISE[i + 1] * f;
+  }
+
+  private static float[] riseTable() {
+    int n = (int) Math.round((Z_MAX - Z_MIN) / DZ) + 2;
+    float[] t = new float[n];
+    for (int i = 0; i < n; i++) {
+      double z = Z_MIN + i * DZ;
+      double u1 = Math.sqrt(Math.max(0, z + 9));
+      int steps = 2000;
+      double h = u1 / steps;
+      double sum = 0;
+      for (int k = 0; k <= steps; k++) {
+        double u = k * h;
+        double y = z - u * u;
+        double v = 2 * u * u * Math.exp(-0.5 * y * y) / Math.sqrt(2 * Math.PI);
+        sum += (k == 0 || k == steps ? 1 : k % 2 == 1 ? 4 : 2) * v;
+      }
+      t[i] = (float) (sum * h / 3);
+    }
+    return t;
+  }
+
+  private static float[] table(boolean second) {
+    int n = (int) Math.round((Z_MAX - Z_MIN) / DZ) + 2;
+    float[] t = new float[n];
+    for (int i = 0; i < n; i++) {
+      t[i] = (float) integral(Z_MIN + i * DZ, second);
+    }
+    return t;
+  }
+
+  /** Integral over u > 0 of g(z - u^2) (or g'), by Simpson's rule over where the integrand lives. */
+  private static double integral(double z, boolean second) {
+    double reach = 9;
+    double u0 = Math.sqrt(Math.max(0, z - reach));
+    double u1 = Math.sqrt(Math.max(0, z + reach));
+    if (u1 <= u0) {
+      return 0;
+    }
+    int steps = 600;
+    double h = (u1 - u0) / steps;
+    double sum = 0;
+    for (int k = 0; k <= steps; k++) {
+      double u = u0 + k * h;
+      double y = z - u * u;
+      double g = Math.exp(-0.5 * y * y) / Math.sqrt(2 * Math.PI);
+      double v = second ? -y * g : g;
+      sum += (k == 0 || k == steps ? 1 : k % 2 == 1 ? 4 : 2) * v;
+    }
+    return sum * h / 3;
+  }
+
+  /** A fitted template: onset (fractional sample index), smear (samples), amplitude and residual. */
+  record Fit(double onset, double sigma, int tail, double coefficient, double spike, double residual) {}
+
+  /**
+   * Fits q_j = a + b j + c T((j - x0) tail / sigma) by least squares, the onset x0 searched in
+   * [lo, hi] (a grid of half samples, then golden-section refinement).
+   *
+   * @param tail +1 when the rise lies towards increasing index, -1 the other way
+   * @param sigma smear, samples
+   * @return the best fit, or null when the profile is too short
+   */
+  static Fit fit(double[] q, Order order, int tail, double sigma, int lo, int hi) {
+    int n = q.length;
+    if (n < 8 || hi <= lo) {
+      return null;
+    }
+    double best = Double.POSITIVE_INFINITY;
+    double bx = lo;
+    for (double x = lo; x <= hi; x += 0.5) {
+      double r = residual(q, order, tail, sigma, x, null);
+      if (r < best) {
+        best = r;
+        bx = x;
+      }
+    }
+    // golden section on the bracket around the best grid point
+    double a = Math.max(lo, bx - 0.5);
+    double b = Math.min(hi, bx + 0.5);
+    double gr = 0.5 * (Math.sqrt(5) - 1);
+    double c = b - gr * (b - a);
+    double d = a + gr * (b - a);
+    double fc = residual(q, order, tail, sigma, c, null);
+    double fd = residual(q, order, tail, sigma, d, null);
+    while (b - a > 1e-3) {
+      if (fc < fd) {
+        b = d;
+        d = c;
+        fd = fc;
+        c = b - gr * (b - a);
+        fc = residual(q, order, tail, sigma, c, null);
+      } else {
+        a = c;
+        c = d;
+        fc = fd;
+        d = a + gr * (b - a);
+        fd = residual(q, order, tail, sigma, d, null);
+      }
+    }
+    double x0 = 0.5 * (a + b);
+    double[] coef = new double[3];
+    double r = residual(q, order, tail, sigma, x0, coef);
+    double spike = coef[2] * extreme(order) / (order == Order.GRADIENT ? Math.sqrt(sigma) : sigma * Math.sqrt(sigma));
+    return new Fit(x0, sigma, tail, coef[2], spike, r);
+  }
+
+  /** The unit profile's largest excursion (its spike's height). */
+  private static double extreme(Order order) {
+    double m = 0;
+    for (double z = -3; z <= 3; z += DZ) {
+      double v = unit(order, z);
+      if (Math.abs(v) > Math.abs(m)) {
+        m = v;
+      }
+    }
+    return m;
+  }
+
+  /** Least-squares residual sum of squares at onset x0; the coefficients (a, b, c[, e]) into coef if given. */
+  private static double residual(double[] q, Order order, int tail, double sigma, double x0, double[] coef) {
+    int n = q.length;
+    int k = SECOND_TERM ? 4 : 3;
+    double scale = order == Order.GRADIENT ? 1 / Math.sqrt(sigma) : 1 / (sigma * Math.sqrt(sigma));
+    double[][] m = new double[k][k];
+    double[] v = new double[k];
+    double sqq = 0;
+    double[] x = new double[k];
+    for (int j = 0; j < n; j++) {
+      double z = tail * (j - x0) / sigma;
+      x[0] = 1;
+      x[1] = j;
+      x[2] = scale * unit(order, z);
+      if (k == 4) {
+        // the next term, d^(3/2): its derivative of the same order, up to a constant
+        x[3] = order == Order.GRADIENT ? Math.sqrt(sigma) * scale * rise(z) : sigma * scale * unit(Order.GRADIENT, z);
+      }
+      double y = q[j];
+      for (int a = 0; a < k; a++) {
+        v[a] += x[a] * y;
+        for (int b = 0; b < k; b++) {
+          m[a][b] += x[a] * x[b];
+        }
+      }
+      sqq += y * y;
+    }
+    double[] sol = solve(m, v.clone());
+    if (sol == null) {
+      return Double.POSITIVE_INFINITY;
+    }
+    if (coef != null) {
+      System.arraycopy(sol, 0, coef, 0, 3);
+    }
+    double r = sqq;
+    for (int a = 0; a < k; a++) {
+      r -= sol[a] * v[a];
+    }
+    return r;
+  }
+
+  /** Gaussian elimination with partial pivoting; null when singular. m and v are overwritten. */
+  private static double[] solve(double[][] m, double[] v) {
+    int k = v.length;
+    for (int c = 0; c < k; c++) {
+      int p = c;
+      for (int r = c + 1; r < k; r++) {
+        if (Math.abs(m[r][c]) > Math.abs(m[p][c])) {
+          p = r;
+        }
+      }
+      if (!(Math.abs(m[p][c]) > 1e-300)) {
+        return null;
+      }
+      double[] tr = m[c];
+      m[c] = m[p];
+      m[p] = tr;
+      double tv = v[c];
+      v[c] = v[p];
+      v[p] = tv;
+      for (int r = c + 1; r < k; r++) {
+        double f = m[r][c] / m[c][c];
+        for (int cc = c; cc < k; cc++) {
+          m[r][cc] -= f * m[c][cc];
+        }
+        v[r] -= f * v[c];
+      }
+    }
+    double[] x = new double[k];
+    for (int r = k - 1; r >= 0; r--) {
+      double s = v[r];
+      for (int cc = r + 1; cc < k; cc++) {
+        s -= m[r][cc] * x[cc];
+      }
+      x[r] = s / m[r][r];
+    }
+    return x;
+  }
+
+  /**
+   * The smear and (unless given) the side of the tail that fit a (mean) profile best: every
+   * smear from {@link #MIN_SIGMA_PX} to {@link #MAX_SIGMA_PX} in steps of {@link #SIGMA_STEP_PX}.
+   *
+   * @param samplePx spacing of the samples, px
+   * @param tail +1 or -1 to fix the side of the tail, 0 to try both
+   * @return the best fit (its smear in samples), or null when the profile is too short
+   */
+  static Fit fitSmear(double[] q, Order order, double samplePx, int lo, int hi, int tail) {
+    Fit best = null;
+    for (int side = -1; side <= 1; side += 2) {
+      if (tail != 0 && side != tail) {
+        continue;
+      }
+      for (double s = MIN_SIGMA_PX; s <= MAX_SIGMA_PX + 1e-9; s += SIGMA_STEP_PX) {
+        Fit f = fit(q, order, side, s / samplePx, lo, hi);
+        if (f != null && (best == null || f.residual() < best.residual())) {
+          best = f;
+        }
+      }
+    }
+    return best;
+  }
+
+  /**
+   * The onset of one profile as a {@link Profiles.Located}: its fractional sample index, the
+   * fitted spike's signed height, and the smear's full width at half maximum (samples).
+   *
+   * @param sigma smear, samples (from {@link #fitSmear} on the mean profile)
+   */
+  static Profiles.Located locate(double[] q, Order order, int tail, double sigma, int lo, int hi) {
+    Fit f = fit(q, order, tail, sigma, lo, hi);
+    return f == null ? null : new Profiles.Located(f.onset(), f.spike(), FWHM_PER_SIGMA * sigma);
+  }
+
+  /** Full width at half maximum of a Gaussian over its sigma, 2 sqrt(2 ln 2). */
+  private static final double FWHM_PER_SIGMA = 2 * Math.sqrt(2 * Math.log(2));
+}
