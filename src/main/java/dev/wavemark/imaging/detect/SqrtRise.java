@@ -6,16 +6,24 @@ package dev.wavemark.imaging.detect;
  * behind a cone's shock is, near the shock's silhouette, the jump times the chord through the
  * shock's circle, 2 sqrt(2 R d) at a distance d inside a circle of radius R (plane geometry); so
  * the projected density rises as sqrt(d) from the shock on, the knife edge shows its gradient (a
- * spike with a 1/sqrt(d) tail) and the shadowgraph its second derivative (a dark spike at the
- * onset with a bright d^(-3/2) tail). Neither is symmetric about the shock, so a peak's or a
- * zero crossing's position stands pixels behind the shock and moves along it as R grows; the
- * onset of a fitted template does not.
+ * spike with a 1/sqrt(d) tail) and the shadowgraph its second derivative (a spike at the onset
+ * and a long d^(-3/2) tail of the other sign). Neither is symmetric about the shock, so a peak's
+ * or a pair's centre stands pixels behind the shock, and moves along it as R grows; the onset of
+ * a fitted template does not.
+ *
+ * <p>The next term of the rise in d / R is d^(3/2): the chord's own curvature (2 sqrt(2 R d - d^2)),
+ * the density's gradient behind the shock (a linear rise of the density inward adds (2/3) times
+ * its slope sqrt(2 R) d^(3/2) to the chord integral), and the distance from the apex growing along
+ * the shock's normal all enter there, each relative to the leading term as d / R. With the window
+ * a tenth or more of R near the apex, leaving it out moves the onset by tenths of a pixel there
+ * and so turns the fitted line; it is fitted with its own free coefficient.
  *
  * <p>With S(x) = integral over t > 0 of sqrt(t) g(x - t) dt for the unit normal density g, the
- * substitution t = u^2 gives S'(x) = integral over u > 0 of g(x - u^2) du and S''(x) = integral
- * over u > 0 of g'(x - u^2) du, smooth integrands tabulated once; for a smear sigma, the
- * profiles are sigma^(-1/2) S'(x / sigma) and sigma^(-3/2) S''(x / sigma). Far behind the onset
- * S'(x) tends to 1 / (2 sqrt x) and S''(x) to -1 / (4 x^(3/2)).
+ * substitution t = u^2 gives S(x) = integral of 2 u^2 g(x - u^2) du, S'(x) = integral of
+ * g(x - u^2) du and S''(x) = integral of g'(x - u^2) du (u > 0), smooth integrands tabulated
+ * once; for a smear sigma the rise is sigma^(1/2) S(x / sigma) and its derivatives follow. The
+ * smeared d^(3/2) has S as its derivative (times 3/2) and S' as its second (times 3/2). Far
+ * behind the onset S'(x) tends to 1 / (2 sqrt x) and S''(x) to -1 / (4 x^(3/2)).
  */
 final class SqrtRise {
   private SqrtRise() {}
@@ -32,11 +40,15 @@ final class SqrtRise {
   private static final double Z_MIN = -9;
   private static final double Z_MAX = 64;
   private static final double DZ = 0.01;
-  private static final float[] GRADIENT = table(false);
-  private static final float[] CURVATURE = table(true);
-  private static final float[] RISE = riseTable();
-  /** Whether the d^(3/2) term of the rise is fitted too. */
-  static boolean SECOND_TERM = Boolean.parseBoolean(System.getProperty("sqrtrise.second", "true"));
+  /** Half-range of the normal density kept in the integrals (its tail beyond is below 1e-18). */
+  private static final double REACH = 9;
+  private static final int STEPS = 600;
+  private static final float[] RISE = table(0);
+  private static final float[] SLOPE = table(1);
+  private static final float[] BEND = table(2);
+  /** Heights of the unit spikes, S'(z) and S''(z) at their extremes near the onset. */
+  private static final double SLOPE_SPIKE = extreme(Order.GRADIENT);
+  private static final double BEND_SPIKE = extreme(Order.CURVATURE);
 
   /** Smears tried when fitting one, px: from below the sampling to past any blur the detector handles. */
   static final double MIN_SIGMA_PX = 0.4;
@@ -49,18 +61,14 @@ final class SqrtRise {
       return 0;
     }
     if (z >= Z_MAX) {
-      // the next term of the expansion of the smeared power law, relative 3/8 z^-2 and 15/8 z^-2
+      // the smeared power laws' expansions: (1/2) z^-1/2 (1 + 3/8 z^-2), -(1/4) z^-3/2 (1 + 15/8 z^-2)
       return order == Order.GRADIENT ? 0.5 / Math.sqrt(z) * (1 + 0.375 / (z * z))
           : -0.25 / (z * Math.sqrt(z)) * (1 + 1.875 / (z * z));
     }
-    float[] t = order == Order.GRADIENT ? GRADIENT : CURVATURE;
-    double pos = (z - Z_MIN) / DZ;
-    int i = (int) pos;
-    double f = pos - i;
-    return t[i] * (1 - f) + t[i + 1] * f;
+    return interpolate(order == Order.GRADIENT ? SLOPE : BEND, z);
   }
 
-  /** S(z) = integral over u > 0 of 2 u^2 g(z - u^2) du, the smeared rise itself. */
+  /** The unit-smear rise itself, S(z). */
   static double rise(double z) {
     if (z <= Z_MIN) {
       return 0;
@@ -68,68 +76,76 @@ final class SqrtRise {
     if (z >= Z_MAX) {
       return Math.sqrt(z) * (1 - 0.125 / (z * z));
     }
+    return interpolate(RISE, z);
+  }
+
+  private static double interpolate(float[] t, double z) {
     double pos = (z - Z_MIN) / DZ;
     int i = (int) pos;
     double f = pos - i;
-    return RISE[i] * (1 - f) + RISE[i + 1] * f;
+    return t[i] * (1 - f) + t[i + 1] * f;
   }
 
-  private static float[] riseTable() {
+  /** S (derivative 0), S' (1) or S'' (2) on the table's grid. */
+  private static float[] table(int derivative) {
     int n = (int) Math.round((Z_MAX - Z_MIN) / DZ) + 2;
     float[] t = new float[n];
     for (int i = 0; i < n; i++) {
-      double z = Z_MIN + i * DZ;
-      double u1 = Math.sqrt(Math.max(0, z + 9));
-      int steps = 2000;
-      double h = u1 / steps;
-      double sum = 0;
-      for (int k = 0; k <= steps; k++) {
-        double u = k * h;
-        double y = z - u * u;
-        double v = 2 * u * u * Math.exp(-0.5 * y * y) / Math.sqrt(2 * Math.PI);
-        sum += (k == 0 || k == steps ? 1 : k % 2 == 1 ? 4 : 2) * v;
-      }
-      t[i] = (float) (sum * h / 3);
+      t[i] = (float) integral(Z_MIN + i * DZ, derivative);
     }
     return t;
   }
 
-  private static float[] table(boolean second) {
-    int n = (int) Math.round((Z_MAX - Z_MIN) / DZ) + 2;
-    float[] t = new float[n];
-    for (int i = 0; i < n; i++) {
-      t[i] = (float) integral(Z_MIN + i * DZ, second);
-    }
-    return t;
-  }
-
-  /** Integral over u > 0 of g(z - u^2) (or g'), by Simpson's rule over where the integrand lives. */
-  private static double integral(double z, boolean second) {
-    double reach = 9;
-    double u0 = Math.sqrt(Math.max(0, z - reach));
-    double u1 = Math.sqrt(Math.max(0, z + reach));
+  /** The integral over u > 0 for S, S' or S'' at z, by Simpson's rule over where g(z - u^2) lives. */
+  private static double integral(double z, int derivative) {
+    double u0 = Math.sqrt(Math.max(0, z - REACH));
+    double u1 = Math.sqrt(Math.max(0, z + REACH));
     if (u1 <= u0) {
       return 0;
     }
-    int steps = 600;
-    double h = (u1 - u0) / steps;
+    double h = (u1 - u0) / STEPS;
     double sum = 0;
-    for (int k = 0; k <= steps; k++) {
+    for (int k = 0; k <= STEPS; k++) {
       double u = u0 + k * h;
       double y = z - u * u;
       double g = Math.exp(-0.5 * y * y) / Math.sqrt(2 * Math.PI);
-      double v = second ? -y * g : g;
-      sum += (k == 0 || k == steps ? 1 : k % 2 == 1 ? 4 : 2) * v;
+      double v = switch (derivative) {
+        case 0 -> 2 * u * u * g;
+        case 1 -> g;
+        default -> -y * g;
+      };
+      sum += (k == 0 || k == STEPS ? 1 : k % 2 == 1 ? 4 : 2) * v;
     }
     return sum * h / 3;
   }
 
-  /** A fitted template: onset (fractional sample index), smear (samples), amplitude and residual. */
-  record Fit(double onset, double sigma, int tail, double coefficient, double spike, double residual) {}
+  /** The unit profile's largest excursion near the onset (its spike's signed height). */
+  private static double extreme(Order order) {
+    double m = 0;
+    for (double z = -3; z <= 3; z += DZ) {
+      double v = unit(order, z);
+      if (Math.abs(v) > Math.abs(m)) {
+        m = v;
+      }
+    }
+    return m;
+  }
 
   /**
-   * Fits q_j = a + b j + c T((j - x0) tail / sigma) by least squares, the onset x0 searched in
-   * [lo, hi] (a grid of half samples, then golden-section refinement).
+   * A fitted template.
+   *
+   * @param onset fractional sample index of the onset
+   * @param sigma smear, samples
+   * @param tail +1 when the rise lies towards increasing index, -1 the other way
+   * @param spike signed height of the leading term's spike (profile units)
+   * @param residual residual sum of squares
+   */
+  record Fit(double onset, double sigma, int tail, double spike, double residual) {}
+
+  /**
+   * Fits q_j = a + b j + c T(z_j) + e U(z_j), z_j = tail (j - x0) / sigma, by least squares: T the
+   * smeared sqrt rise's derivative of the picture's order, U the same of its d^(3/2) term. The
+   * onset x0 is searched in [lo, hi] on a grid of half samples, then by golden section.
    *
    * @param tail +1 when the rise lies towards increasing index, -1 the other way
    * @param sigma smear, samples
@@ -173,28 +189,19 @@ final class SqrtRise {
       }
     }
     double x0 = 0.5 * (a + b);
-    double[] coef = new double[3];
+    double[] coef = new double[TERMS];
     double r = residual(q, order, tail, sigma, x0, coef);
-    double spike = coef[2] * extreme(order) / (order == Order.GRADIENT ? Math.sqrt(sigma) : sigma * Math.sqrt(sigma));
-    return new Fit(x0, sigma, tail, coef[2], spike, r);
+    double spike = coef[2] * (order == Order.GRADIENT ? SLOPE_SPIKE / Math.sqrt(sigma) : BEND_SPIKE / (sigma * Math.sqrt(sigma)));
+    return new Fit(x0, sigma, tail, spike, r);
   }
 
-  /** The unit profile's largest excursion (its spike's height). */
-  private static double extreme(Order order) {
-    double m = 0;
-    for (double z = -3; z <= 3; z += DZ) {
-      double v = unit(order, z);
-      if (Math.abs(v) > Math.abs(m)) {
-        m = v;
-      }
-    }
-    return m;
-  }
+  /** Fitted terms: level, slope, the rise's leading term and its d^(3/2) term. */
+  private static final int TERMS = 4;
 
-  /** Least-squares residual sum of squares at onset x0; the coefficients (a, b, c[, e]) into coef if given. */
+  /** Least-squares residual sum of squares at onset x0; the coefficients (a, b, c, e) into coef if given. */
   private static double residual(double[] q, Order order, int tail, double sigma, double x0, double[] coef) {
     int n = q.length;
-    int k = SECOND_TERM ? 4 : 3;
+    int k = TERMS;
     double scale = order == Order.GRADIENT ? 1 / Math.sqrt(sigma) : 1 / (sigma * Math.sqrt(sigma));
     double[][] m = new double[k][k];
     double[] v = new double[k];
@@ -205,10 +212,8 @@ final class SqrtRise {
       x[0] = 1;
       x[1] = j;
       x[2] = scale * unit(order, z);
-      if (k == 4) {
-        // the next term, d^(3/2): its derivative of the same order, up to a constant
-        x[3] = order == Order.GRADIENT ? Math.sqrt(sigma) * scale * rise(z) : sigma * scale * unit(Order.GRADIENT, z);
-      }
+      // the d^(3/2) term's derivative of the same order, up to a constant (the fit sets it)
+      x[3] = order == Order.GRADIENT ? rise(z) : unit(Order.GRADIENT, z);
       double y = q[j];
       for (int a = 0; a < k; a++) {
         v[a] += x[a] * y;
@@ -223,7 +228,7 @@ final class SqrtRise {
       return Double.POSITIVE_INFINITY;
     }
     if (coef != null) {
-      System.arraycopy(sol, 0, coef, 0, 3);
+      System.arraycopy(sol, 0, coef, 0, k);
     }
     double r = sqq;
     for (int a = 0; a < k; a++) {
