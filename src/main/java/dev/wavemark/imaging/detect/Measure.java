@@ -95,14 +95,14 @@ final class Measure {
     int sign;
     // a cone's smear (shock thickness and blur) and the side its tail lies on are read from the
     // mean profile, whose noise is that of one profile over the number of them
-    double smear = Double.NaN;
+    SqrtRise.Template onset = null;
     if (sig.onset()) {
       SqrtRise.Fit f = SqrtRise.fitSmear(mean, order(sig), SAMPLE_PX, lo, hi, fixedSign);
       if (f == null) {
         return null;
       }
-      smear = f.sigma();
       sign = f.tail();
+      onset = SqrtRise.template(order(sig), sign, f.sigma(), m, lo, hi);
     } else {
       sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
     }
@@ -113,7 +113,7 @@ final class Measure {
     double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
-    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, smear);
+    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, onset);
     double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
     int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
     group = Math.max(1, Math.min(group, valid / Math.max(minSupport / 4, 1)));
@@ -134,7 +134,7 @@ final class Measure {
       if (prof[k] == null) {
         continue;
       }
-      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, smear);
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset);
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
@@ -204,14 +204,16 @@ final class Measure {
   /**
    * The centre of one profile.
    *
-   * @param smear the smear of a cone's shock, samples (ROOT_SPIKE, ROOT_PAIR; ignored otherwise)
+   * @param onset a cone's shock template, its smear and side fitted to the mean profile (ROOT_SPIKE,
+   *     ROOT_PAIR; ignored otherwise)
    */
-  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep, double smear) {
+  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep,
+      SqrtRise.@org.jspecify.annotations.Nullable Template onset) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));
       case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
-      case ROOT_SPIKE, ROOT_PAIR -> SqrtRise.locate(p, order(sig), sign, smear, lo, hi);
+      case ROOT_SPIKE, ROOT_PAIR -> onset == null ? null : onset.locate(p);
     };
   }
 

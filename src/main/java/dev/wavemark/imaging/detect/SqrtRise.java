@@ -53,7 +53,7 @@ final class SqrtRise {
   /** Smears tried when fitting one, px: from below the sampling to past any blur the detector handles. */
   static final double MIN_SIGMA_PX = 0.4;
   static final double MAX_SIGMA_PX = 6.0;
-  static final double SIGMA_STEP_PX = 0.1;
+  static final double SIGMA_STEP_PX = 0.5;
 
   /** The unit-smear profile of the given order at z (distance behind the onset over the smear). */
   static double unit(Order order, double z) {
@@ -145,7 +145,8 @@ final class SqrtRise {
   /**
    * Fits q_j = a + b j + c T(z_j) + e U(z_j), z_j = tail (j - x0) / sigma, by least squares: T the
    * smeared sqrt rise's derivative of the picture's order, U the same of its d^(3/2) term. The
-   * onset x0 is searched in [lo, hi] on a grid of half samples, then by golden section.
+   * onset x0 is searched in [lo, hi] on a grid of whole samples, then by golden section (the
+   * smear is at least a sample, so the residual has one minimum within a sample of the grid's).
    *
    * @param tail +1 when the rise lies towards increasing index, -1 the other way
    * @param sigma smear, samples
@@ -158,7 +159,7 @@ final class SqrtRise {
     }
     double best = Double.POSITIVE_INFINITY;
     double bx = lo;
-    for (double x = lo; x <= hi; x += 0.5) {
+    for (double x = lo; x <= hi; x += 1) {
       double r = residual(q, order, tail, sigma, x, null);
       if (r < best) {
         best = r;
@@ -166,8 +167,8 @@ final class SqrtRise {
       }
     }
     // golden section on the bracket around the best grid point
-    double a = Math.max(lo, bx - 0.5);
-    double b = Math.min(hi, bx + 0.5);
+    double a = Math.max(lo, bx - 1);
+    double b = Math.min(hi, bx + 1);
     double gr = 0.5 * (Math.sqrt(5) - 1);
     double c = b - gr * (b - a);
     double d = a + gr * (b - a);
@@ -276,8 +277,9 @@ final class SqrtRise {
   }
 
   /**
-   * The smear and (unless given) the side of the tail that fit a (mean) profile best: every
-   * smear from {@link #MIN_SIGMA_PX} to {@link #MAX_SIGMA_PX} in steps of {@link #SIGMA_STEP_PX}.
+   * The smear and (unless given) the side of the tail that fit a (mean) profile best: smears from
+   * {@link #MIN_SIGMA_PX} to {@link #MAX_SIGMA_PX} every {@link #SIGMA_STEP_PX} on each side, then
+   * golden section to a hundredth of a pixel about the best on its side.
    *
    * @param samplePx spacing of the samples, px
    * @param tail +1 or -1 to fix the side of the tail, 0 to try both
@@ -296,18 +298,202 @@ final class SqrtRise {
         }
       }
     }
+    if (best == null) {
+      return null;
+    }
+    int side = best.tail();
+    double a = Math.max(MIN_SIGMA_PX, best.sigma() * samplePx - SIGMA_STEP_PX);
+    double b = Math.min(MAX_SIGMA_PX, best.sigma() * samplePx + SIGMA_STEP_PX);
+    double gr = 0.5 * (Math.sqrt(5) - 1);
+    double c = b - gr * (b - a);
+    double d = a + gr * (b - a);
+    Fit fc = fit(q, order, side, c / samplePx, lo, hi);
+    Fit fd = fit(q, order, side, d / samplePx, lo, hi);
+    while (b - a > 0.01) {
+      if (fc.residual() < fd.residual()) {
+        b = d;
+        d = c;
+        fd = fc;
+        c = b - gr * (b - a);
+        fc = fit(q, order, side, c / samplePx, lo, hi);
+      } else {
+        a = c;
+        c = d;
+        fc = fd;
+        d = a + gr * (b - a);
+        fd = fit(q, order, side, d / samplePx, lo, hi);
+      }
+    }
+    for (Fit f : new Fit[] {fc, fd}) {
+      if (f.residual() < best.residual()) {
+        best = f;
+      }
+    }
     return best;
+  }
+
+  /**
+   * The template of one smear and side, laid out for many profiles of n samples: its terms and
+   * the inverse of the fit's normal matrix at onsets every {@link #GRID} samples over [lo, hi],
+   * so that fitting a profile costs four dot products per onset tried.
+   *
+   * @param sigma smear, samples (from {@link #fitSmear} on the mean profile)
+   */
+  static Template template(Order order, int tail, double sigma, int n, int lo, int hi) {
+    return new Template(order, tail, sigma, n, lo, hi);
   }
 
   /**
    * The onset of one profile as a {@link Profiles.Located}: its fractional sample index, the
    * fitted spike's signed height, and the smear's full width at half maximum (samples).
-   *
-   * @param sigma smear, samples (from {@link #fitSmear} on the mean profile)
    */
   static Profiles.Located locate(double[] q, Order order, int tail, double sigma, int lo, int hi) {
-    Fit f = fit(q, order, tail, sigma, lo, hi);
-    return f == null ? null : new Profiles.Located(f.onset(), f.spike(), FWHM_PER_SIGMA * sigma);
+    return template(order, tail, sigma, q.length, lo, hi).locate(q);
+  }
+
+  /** Spacing of a {@link Template}'s onsets, samples. */
+  static final double GRID = 0.1;
+  /** Onsets of a {@link Template} per coarse step of its search (a sample). */
+  private static final int COARSE = 10;
+
+  /** See {@link #template}. */
+  static final class Template {
+    private final int n;
+    private final int lo;
+    private final double sigma;
+    private final Order order;
+    private final double[][] rise;
+    private final double[][] next;
+    private final double[][] inverse;
+
+    private Template(Order order, int tail, double sigma, int n, int lo, int hi) {
+      this.n = n;
+      this.lo = lo;
+      this.sigma = sigma;
+      this.order = order;
+      int count = (int) Math.floor((hi - lo) / GRID + 1e-9) + 1;
+      rise = new double[count][n];
+      next = new double[count][n];
+      inverse = new double[count][];
+      double scale = order == Order.GRADIENT ? 1 / Math.sqrt(sigma) : 1 / (sigma * Math.sqrt(sigma));
+      for (int g = 0; g < count; g++) {
+        double x0 = lo + g * GRID;
+        double[][] m = new double[TERMS][TERMS];
+        for (int j = 0; j < n; j++) {
+          double z = tail * (j - x0) / sigma;
+          rise[g][j] = scale * unit(order, z);
+          next[g][j] = order == Order.GRADIENT ? rise(z) : unit(Order.GRADIENT, z);
+          double[] x = {1, j, rise[g][j], next[g][j]};
+          for (int a = 0; a < TERMS; a++) {
+            for (int b = 0; b < TERMS; b++) {
+              m[a][b] += x[a] * x[b];
+            }
+          }
+        }
+        inverse[g] = invert(m);
+      }
+    }
+
+    /** The profile's onset, spike and the smear's width, or null when it is not n samples long. */
+    Profiles.Located locate(double[] q) {
+      if (q.length != n) {
+        return null;
+      }
+      double qq = 0;
+      double q0 = 0;
+      double q1 = 0;
+      for (int j = 0; j < n; j++) {
+        qq += q[j] * q[j];
+        q0 += q[j];
+        q1 += j * q[j];
+      }
+      int count = inverse.length;
+      int best = -1;
+      double bestR = Double.POSITIVE_INFINITY;
+      // a whole sample apart (the residual's trough is a smear wide, a sample or more), then
+      // narrowing steps about the best
+      for (int g = 0; g < count; g += COARSE) {
+        double r = residual(g, q, qq, q0, q1, null);
+        if (r < bestR) {
+          bestR = r;
+          best = g;
+        }
+      }
+      if (best < 0) {
+        return null;
+      }
+      for (int step : new int[] {COARSE / 5, 1}) {
+        int centre = best;
+        for (int g = Math.max(0, centre - 5 * step); g <= Math.min(count - 1, centre + 5 * step); g += step) {
+          double r = g == centre ? bestR : residual(g, q, qq, q0, q1, null);
+          if (r < bestR) {
+            bestR = r;
+            best = g;
+          }
+        }
+      }
+      double pos = best;
+      if (best > 0 && best < count - 1) {
+        // the vertex of the parabola through the best onset and its neighbours
+        double rm = residual(best - 1, q, qq, q0, q1, null);
+        double rp = residual(best + 1, q, qq, q0, q1, null);
+        double den = rm - 2 * bestR + rp;
+        if (den > 0) {
+          pos += Math.max(-0.5, Math.min(0.5, 0.5 * (rm - rp) / den));
+        }
+      }
+      double[] coef = new double[TERMS];
+      residual(best, q, qq, q0, q1, coef);
+      double spike = coef[2] * (order == Order.GRADIENT ? SLOPE_SPIKE / Math.sqrt(sigma) : BEND_SPIKE / (sigma * Math.sqrt(sigma)));
+      return new Profiles.Located(lo + pos * GRID, spike, FWHM_PER_SIGMA * sigma);
+    }
+
+    private double residual(int g, double[] q, double qq, double q0, double q1, double[] coef) {
+      double[] inv = inverse[g];
+      if (inv == null) {
+        return Double.POSITIVE_INFINITY;
+      }
+      double[] t = rise[g];
+      double[] u = next[g];
+      double q2 = 0;
+      double q3 = 0;
+      for (int j = 0; j < n; j++) {
+        q2 += t[j] * q[j];
+        q3 += u[j] * q[j];
+      }
+      double r = qq;
+      for (int a = 0; a < TERMS; a++) {
+        int i = a * TERMS;
+        double c = inv[i] * q0 + inv[i + 1] * q1 + inv[i + 2] * q2 + inv[i + 3] * q3;
+        r -= c * (a == 0 ? q0 : a == 1 ? q1 : a == 2 ? q2 : q3);
+        if (coef != null) {
+          coef[a] = c;
+        }
+      }
+      return r;
+    }
+  }
+
+  /** The inverse of a symmetric matrix, row-major, by elimination against the identity; null when singular. */
+  private static double[] invert(double[][] m) {
+    int k = m.length;
+    double[] out = new double[k * k];
+    for (int c = 0; c < k; c++) {
+      double[][] a = new double[k][];
+      for (int r = 0; r < k; r++) {
+        a[r] = m[r].clone();
+      }
+      double[] e = new double[k];
+      e[c] = 1;
+      double[] x = solve(a, e);
+      if (x == null) {
+        return null;
+      }
+      for (int r = 0; r < k; r++) {
+        out[r * k + c] = x[r];
+      }
+    }
+    return out;
   }
 
   /** Full width at half maximum of a Gaussian over its sigma, 2 sqrt(2 ln 2). */
