@@ -93,16 +93,13 @@ final class Measure {
     int lo = m / 6;
     int hi = m - 1 - m / 6;
     int sign;
-    // a cone's smear (shock thickness and blur) and the side its tail lies on are read from the
-    // mean profile, whose noise is that of one profile over the number of them
-    SqrtRise.Template onset = null;
+    Cone cone = null;
     if (sig.onset()) {
-      SqrtRise.Fit f = SqrtRise.fitSmear(mean, order(sig), SAMPLE_PX, lo, hi, fixedSign);
-      if (f == null) {
+      cone = cone(mean, prof, c, sig, fixedSign, lo, hi);
+      if (cone == null) {
         return null;
       }
-      sign = f.tail();
-      onset = SqrtRise.template(order(sig), sign, f.sigma(), m, lo, hi);
+      sign = cone.tail();
     } else {
       sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
     }
@@ -113,7 +110,8 @@ final class Measure {
     double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
-    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, onset);
+    SqrtRise.Template onset = cone == null ? null : cone.template();
+    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, onset, Double.NaN);
     double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
     int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
     group = Math.max(1, Math.min(group, valid / Math.max(minSupport / 4, 1)));
@@ -134,12 +132,12 @@ final class Measure {
       if (prof[k] == null) {
         continue;
       }
-      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset);
+      double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset, cone == null ? Double.NaN : cone.kappa() / s);
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
       double o = l.centre() * SAMPLE_PX - halfWindowPx;
-      double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
       double px = c.ox() + s * c.ux() + o * nx;
       double py = c.oy() + s * c.uy() + o * ny;
       dx[n] = px;
@@ -169,6 +167,59 @@ final class Measure {
       return null;
     }
     return new Result(fit, distorted, ampSum / n, widthSum / n, sign);
+  }
+
+  /** A cone's shock template, the side of its tail, and its similarity constant kappa (NaN: none). */
+  private record Cone(SqrtRise.Template template, int tail, double kappa) {}
+
+  /**
+   * A cone's smear (shock thickness and blur) and the side its tail lies on, read from the mean
+   * profile (whose noise is one profile's over the number of them), and for the knife edge the
+   * similarity constant; null when the mean profile is too short to fit.
+   */
+  private static @org.jspecify.annotations.Nullable Cone cone(double[] mean, double[][] prof, Candidate c, Signature sig,
+      int fixedSign, int lo, int hi) {
+    SqrtRise.Fit f = SqrtRise.fitSmear(mean, order(sig), SAMPLE_PX, lo, hi, fixedSign);
+    if (f == null) {
+      return null;
+    }
+    SqrtRise.Template t = SqrtRise.template(order(sig), f.tail(), f.sigma(), mean.length, lo, hi);
+    // the knife edge's picture is linear in the gradient and keeps the field's conical
+    // similarity; the shadowgraph's ray displacement grows with the deflection and does not
+    if (sig != Signature.ROOT_SPIKE) {
+      return new Cone(t, f.tail(), Double.NaN);
+    }
+    double[] along = new double[prof.length];
+    int v = 0;
+    for (int k = 0; k < prof.length; k++) {
+      if (prof[k] != null) {
+        along[v++] = c.s0() + k * NORMAL_STEP_PX;
+      }
+    }
+    return new Cone(t, f.tail(), similarity(f.next(), java.util.Arrays.copyOf(along, v)));
+  }
+
+  /**
+   * A cone's field is conical, so the projected density across its shock at distance s from the
+   * apex is s G(d / s) for one function G: with G(u) = a u^(1/2) + b u^(3/2) near the shock, the
+   * leading term grows as sqrt(s) and the next, relative to it, falls as 1 / s. The mean of the
+   * profiles at distances s_k then shows the two in the ratio kappa sum(s_k^-1/2) / sum(s_k^1/2),
+   * from which kappa follows; a profile's own ratio is kappa / s.
+   *
+   * @param meanRatio the ratio fitted to the mean profile
+   * @param s the profiles' distances from the apex, px
+   * @return kappa, px; NaN when there is nothing to go on
+   */
+  static double similarity(double meanRatio, double[] s) {
+    double up = 0;
+    double down = 0;
+    for (double v : s) {
+      if (v > 0) {
+        up += Math.sqrt(v);
+        down += 1 / Math.sqrt(v);
+      }
+    }
+    return down > 0 && Double.isFinite(meanRatio) ? meanRatio * up / down : Double.NaN;
   }
 
   /** Means of consecutive runs of {@code g} profiles; a run with a missing profile is dropped. */
@@ -206,14 +257,15 @@ final class Measure {
    *
    * @param onset a cone's shock template, its smear and side fitted to the mean profile (ROOT_SPIKE,
    *     ROOT_PAIR; ignored otherwise)
+   * @param next a cone's d^(3/2) term over its leading term at this profile, NaN to fit it freely
    */
   static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep,
-      SqrtRise.@org.jspecify.annotations.Nullable Template onset) {
+      SqrtRise.@org.jspecify.annotations.Nullable Template onset, double next) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));
       case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
-      case ROOT_SPIKE, ROOT_PAIR -> onset == null ? null : onset.locate(p);
+      case ROOT_SPIKE, ROOT_PAIR -> onset == null ? null : onset.locate(p, next);
     };
   }
 

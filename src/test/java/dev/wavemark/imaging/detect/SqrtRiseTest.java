@@ -32,6 +32,12 @@ class SqrtRiseTest {
    * window's far end for R = 40 px) are left out of the fit.
    */
   private static final double APEX_TOL_PX = 0.05;
+  /**
+   * Onset with the d^(3/2) term's share fixed by similarity, px: the mean profile's fitted share
+   * takes in a little of the terms beyond, a few per cent of the share (a few thousandths of a
+   * pixel here).
+   */
+  private static final double SIMILAR_TOL_PX = 0.01;
 
   /** Unit normal density and its first two derivatives. */
   private static double g(double y, int derivative) {
@@ -171,6 +177,38 @@ class SqrtRiseTest {
       assertEquals(tail, f.tail(), "tail");
       assertEquals(1.8, f.sigma() * STEP_PX, 0.051, "smear, tail " + tail);
       assertEquals(0.3, f.onset() * STEP_PX - HALF_PX, ONSET_TOL_PX, "onset, tail " + tail);
+    }
+  }
+
+  /**
+   * Conical similarity (the field depends on the angle from the apex only): along a 30 degree
+   * shock the shell's radius is R = s sin 30 deg and the density slope behind it falls as 1 / s,
+   * so the d^(3/2) term's share falls as 1 / s. The constant read from the mean of the profiles
+   * ({@link Measure#similarity}) gives each profile's share, and with it fixed the onset is found
+   * along the whole shock, from 60 px off the apex (R = 30 px) to 900 px.
+   */
+  @Test
+  void similarityFromTheMeanProfileHoldsAlongTheShock() {
+    double sigma = 1.5;
+    double[] s = {60, 80, 110, 150, 200, 280, 400, 600, 900};
+    double[][] p = new double[s.length][];
+    double[] mean = new double[N];
+    for (int i = 0; i < s.length; i++) {
+      // schlieren, the rise towards decreasing index; a density slope of 0.02 per px at 70 px
+      p[i] = profile(0.4, sigma, 0.5 * s[i], 0.02 * 70 / s[i], 1, -1);
+      for (int j = 0; j < N; j++) {
+        mean[j] += p[i][j] / s.length;
+      }
+    }
+    SqrtRise.Fit f = SqrtRise.fitSmear(mean, SqrtRise.Order.GRADIENT, STEP_PX, LO, HI, -1);
+    assertNotNull(f);
+    double kappa = Measure.similarity(f.next(), s);
+    assertTrue(kappa > 0, "the density rising inward and the chord's curvature: kappa " + kappa);
+    SqrtRise.Template t = SqrtRise.template(SqrtRise.Order.GRADIENT, -1, f.sigma(), N, LO, HI);
+    for (int i = 0; i < s.length; i++) {
+      Profiles.Located l = t.locate(p[i], kappa / s[i]);
+      assertNotNull(l);
+      assertEquals(0.4, l.centre() * STEP_PX - HALF_PX, SIMILAR_TOL_PX, "onset at " + s[i] + " px from the apex");
     }
   }
 }
