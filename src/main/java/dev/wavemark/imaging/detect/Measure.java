@@ -110,7 +110,7 @@ final class Measure {
     double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
-    SqrtRise.Template onset = cone == null ? null : cone.template();
+    SqrtRiseTemplate onset = cone == null ? null : cone.template();
     Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, onset, Double.NaN);
     double meanAmp = ml == null ? 0 : Math.abs(ml.amplitude());
     int group = meanAmp <= 0 ? 1 : (int) Math.ceil(Math.pow(8 * noiseSig / meanAmp, 2));
@@ -133,7 +133,7 @@ final class Measure {
         continue;
       }
       double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
-      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset, cone == null ? Double.NaN : cone.kappa() / s);
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset, cone == null ? Double.NaN : cone.shareAt(s));
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
@@ -169,13 +169,40 @@ final class Measure {
     return new Result(fit, distorted, ampSum / n, widthSum / n, sign);
   }
 
-  /** A cone's shock template, the side of its tail, and its similarity constant kappa (NaN: none). */
-  private record Cone(SqrtRise.Template template, int tail, double kappa) {}
+  /** Normals per stretch of a cone's shock over which the d^(3/2) term's share is read. */
+  static final int SHARE_STRETCH = 50;
+
+  /**
+   * A cone's shock template and the side of its tail, with the d^(3/2) term's share read on
+   * stretches of the shock (distance from the origin, px, and share; empty when none could be read).
+   */
+  record Cone(SqrtRiseTemplate template, int tail, double[] along, double[] share) {
+    /** The share at distance s along the shock, linear between the stretches; NaN (free) when none. */
+    double shareAt(double s) {
+      int n = along.length;
+      if (n == 0) {
+        return Double.NaN;
+      }
+      if (s <= along[0] || n == 1) {
+        return share[0];
+      }
+      for (int i = 1; i < n; i++) {
+        if (s <= along[i]) {
+          double f = (s - along[i - 1]) / (along[i] - along[i - 1]);
+          return share[i - 1] + f * (share[i] - share[i - 1]);
+        }
+      }
+      return share[n - 1];
+    }
+  }
 
   /**
    * A cone's smear (shock thickness and blur) and the side its tail lies on, read from the mean
-   * profile (whose noise is one profile's over the number of them), and for the knife edge the
-   * similarity constant; null when the mean profile is too short to fit.
+   * profile (whose noise is one profile's over the number of them), and the d^(3/2) term's share
+   * from the mean of each stretch of {@link #SHARE_STRETCH} normals: the field is conical, so the
+   * share changes only slowly with the distance from the apex (as 1 / s to first order, but the
+   * terms beyond bend that near the apex), and a profile's own fit of it would add its noise to
+   * the onset. Null when the mean profile is too short to fit.
    */
   private static @org.jspecify.annotations.Nullable Cone cone(double[] mean, double[][] prof, Candidate c, Signature sig,
       int fixedSign, int lo, int hi) {
@@ -183,43 +210,35 @@ final class Measure {
     if (f == null) {
       return null;
     }
-    SqrtRise.Template t = SqrtRise.template(order(sig), f.tail(), f.sigma(), mean.length, lo, hi);
-    // the knife edge's picture is linear in the gradient and keeps the field's conical
-    // similarity; the shadowgraph's ray displacement grows with the deflection and does not
-    if (sig != Signature.ROOT_SPIKE) {
-      return new Cone(t, f.tail(), Double.NaN);
-    }
-    double[] along = new double[prof.length];
-    int v = 0;
-    for (int k = 0; k < prof.length; k++) {
-      if (prof[k] != null) {
-        along[v++] = c.s0() + k * NORMAL_STEP_PX;
+    SqrtRiseTemplate t = SqrtRise.template(order(sig), f.tail(), f.sigma(), mean.length, lo, hi);
+    int stretches = (prof.length + SHARE_STRETCH - 1) / SHARE_STRETCH;
+    double[] along = new double[stretches];
+    double[] share = new double[stretches];
+    int n = 0;
+    for (int b = 0; b < stretches; b++) {
+      double[] acc = new double[mean.length];
+      double sum = 0;
+      int used = 0;
+      for (int k = b * SHARE_STRETCH; k < Math.min(prof.length, (b + 1) * SHARE_STRETCH); k++) {
+        if (prof[k] != null) {
+          for (int j = 0; j < acc.length; j++) {
+            acc[j] += prof[k][j];
+          }
+          sum += c.s0() + k * NORMAL_STEP_PX;
+          used++;
+        }
+      }
+      if (used < SHARE_STRETCH / 4) {
+        continue;
+      }
+      SqrtRise.Fit g = SqrtRise.fit(acc, order(sig), f.tail(), f.sigma(), lo, hi);
+      if (g != null && Double.isFinite(g.next())) {
+        along[n] = sum / used;
+        share[n] = g.next();
+        n++;
       }
     }
-    return new Cone(t, f.tail(), similarity(f.next(), java.util.Arrays.copyOf(along, v)));
-  }
-
-  /**
-   * A cone's field is conical, so the projected density across its shock at distance s from the
-   * apex is s G(d / s) for one function G: with G(u) = a u^(1/2) + b u^(3/2) near the shock, the
-   * leading term grows as sqrt(s) and the next, relative to it, falls as 1 / s. The mean of the
-   * profiles at distances s_k then shows the two in the ratio kappa sum(s_k^-1/2) / sum(s_k^1/2),
-   * from which kappa follows; a profile's own ratio is kappa / s.
-   *
-   * @param meanRatio the ratio fitted to the mean profile
-   * @param s the profiles' distances from the apex, px
-   * @return kappa, px; NaN when there is nothing to go on
-   */
-  static double similarity(double meanRatio, double[] s) {
-    double up = 0;
-    double down = 0;
-    for (double v : s) {
-      if (v > 0) {
-        up += Math.sqrt(v);
-        down += 1 / Math.sqrt(v);
-      }
-    }
-    return down > 0 && Double.isFinite(meanRatio) ? meanRatio * up / down : Double.NaN;
+    return new Cone(t, f.tail(), java.util.Arrays.copyOf(along, n), java.util.Arrays.copyOf(share, n));
   }
 
   /** Means of consecutive runs of {@code g} profiles; a run with a missing profile is dropped. */
@@ -260,7 +279,7 @@ final class Measure {
    * @param next a cone's d^(3/2) term over its leading term at this profile, NaN to fit it freely
    */
   static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep,
-      SqrtRise.@org.jspecify.annotations.Nullable Template onset, double next) {
+      @org.jspecify.annotations.Nullable SqrtRiseTemplate onset, double next) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));

@@ -47,8 +47,8 @@ final class SqrtRise {
   private static final float[] SLOPE = table(1);
   private static final float[] BEND = table(2);
   /** Heights of the unit spikes, S'(z) and S''(z) at their extremes near the onset. */
-  private static final double SLOPE_SPIKE = extreme(Order.GRADIENT);
-  private static final double BEND_SPIKE = extreme(Order.CURVATURE);
+  static final double SLOPE_SPIKE = extreme(Order.GRADIENT);
+  static final double BEND_SPIKE = extreme(Order.CURVATURE);
 
   /** Smears tried when fitting one, px: from below the sampling to past any blur the detector handles. */
   static final double MIN_SIGMA_PX = 0.4;
@@ -138,7 +138,7 @@ final class SqrtRise {
    * @param sigma smear, samples
    * @param tail +1 when the rise lies towards increasing index, -1 the other way
    * @param spike signed height of the leading term's spike (profile units)
-   * @param next the d^(3/2) term's coefficient over the leading term's (in the columns of {@link Template})
+   * @param next the d^(3/2) term's coefficient over the leading term's (in the columns of {@link SqrtRiseTemplate})
    * @param residual residual sum of squares
    */
   record Fit(double onset, double sigma, int tail, double spike, double next, double residual) {}
@@ -198,7 +198,7 @@ final class SqrtRise {
   }
 
   /** Fitted terms: level, slope, the rise's leading term and its d^(3/2) term. */
-  private static final int TERMS = 4;
+  static final int TERMS = 4;
 
   /** Least-squares residual sum of squares at onset x0; the coefficients (a, b, c, e) into coef if given. */
   private static double residual(double[] q, Order order, int tail, double sigma, double x0, double[] coef) {
@@ -240,7 +240,7 @@ final class SqrtRise {
   }
 
   /** Gaussian elimination with partial pivoting; null when singular. m and v are overwritten. */
-  private static double[] solve(double[][] m, double[] v) {
+  static double[] solve(double[][] m, double[] v) {
     int k = v.length;
     for (int c = 0; c < k; c++) {
       int p = c;
@@ -335,13 +335,13 @@ final class SqrtRise {
 
   /**
    * The template of one smear and side, laid out for many profiles of n samples: its terms and
-   * the inverse of the fit's normal matrix at onsets every {@link #GRID} samples over [lo, hi],
+   * the inverse of the fit's normal matrix at onsets every {@link SqrtRiseTemplate#GRID} samples over [lo, hi],
    * so that fitting a profile costs four dot products per onset tried.
    *
    * @param sigma smear, samples (from {@link #fitSmear} on the mean profile)
    */
-  static Template template(Order order, int tail, double sigma, int n, int lo, int hi) {
-    return new Template(order, tail, sigma, n, lo, hi);
+  static SqrtRiseTemplate template(Order order, int tail, double sigma, int n, int lo, int hi) {
+    return new SqrtRiseTemplate(order, tail, sigma, n, lo, hi);
   }
 
   /**
@@ -352,207 +352,6 @@ final class SqrtRise {
     return template(order, tail, sigma, q.length, lo, hi).locate(q);
   }
 
-  /** Spacing of a {@link Template}'s onsets, samples. */
-  static final double GRID = 0.1;
-  /** Onsets of a {@link Template} per coarse step of its search (a sample). */
-  private static final int COARSE = 10;
-
-  /** See {@link #template}. */
-  static final class Template {
-    private final int n;
-    private final int lo;
-    private final double sigma;
-    private final Order order;
-    private final double[][] rise;
-    private final double[][] term2;
-    private final double[][] inverse;
-    /** Per onset: sums of T, U, j T, j U, T T, T U and U U over the profile. */
-    private final double[][] sums;
-    private final double sumJ;
-    private final double sumJJ;
-
-    private Template(Order order, int tail, double sigma, int n, int lo, int hi) {
-      this.n = n;
-      this.lo = lo;
-      this.sigma = sigma;
-      this.order = order;
-      int count = (int) Math.floor((hi - lo) / GRID + 1e-9) + 1;
-      rise = new double[count][n];
-      term2 = new double[count][n];
-      inverse = new double[count][];
-      sums = new double[count][7];
-      double sj = 0;
-      double sjj = 0;
-      for (int j = 0; j < n; j++) {
-        sj += j;
-        sjj += (double) j * j;
-      }
-      sumJ = sj;
-      sumJJ = sjj;
-      double scale = order == Order.GRADIENT ? 1 / Math.sqrt(sigma) : 1 / (sigma * Math.sqrt(sigma));
-      for (int g = 0; g < count; g++) {
-        double x0 = lo + g * GRID;
-        double[][] m = new double[TERMS][TERMS];
-        for (int j = 0; j < n; j++) {
-          double z = tail * (j - x0) / sigma;
-          rise[g][j] = scale * unit(order, z);
-          term2[g][j] = order == Order.GRADIENT ? rise(z) : unit(Order.GRADIENT, z);
-          double[] x = {1, j, rise[g][j], term2[g][j]};
-          double[] sg = sums[g];
-          sg[0] += x[2];
-          sg[1] += x[3];
-          sg[2] += j * x[2];
-          sg[3] += j * x[3];
-          sg[4] += x[2] * x[2];
-          sg[5] += x[2] * x[3];
-          sg[6] += x[3] * x[3];
-          for (int a = 0; a < TERMS; a++) {
-            for (int b = 0; b < TERMS; b++) {
-              m[a][b] += x[a] * x[b];
-            }
-          }
-        }
-        inverse[g] = invert(m);
-      }
-    }
-
-    /** As {@link #locate(double[], double)} with the d^(3/2) term free. */
-    Profiles.Located locate(double[] q) {
-      return locate(q, Double.NaN);
-    }
-
-    /**
-     * The profile's onset, spike and the smear's width, or null when it is not n samples long.
-     *
-     * @param next the d^(3/2) term's coefficient over the leading term's, or NaN to fit it freely
-     */
-    Profiles.Located locate(double[] q, double next) {
-      if (q.length != n) {
-        return null;
-      }
-      double qq = 0;
-      double q0 = 0;
-      double q1 = 0;
-      for (int j = 0; j < n; j++) {
-        qq += q[j] * q[j];
-        q0 += q[j];
-        q1 += j * q[j];
-      }
-      int count = inverse.length;
-      int best = -1;
-      double bestR = Double.POSITIVE_INFINITY;
-      // a whole sample apart (the residual's trough is a smear wide, a sample or more), then
-      // narrowing steps about the best
-      for (int g = 0; g < count; g += COARSE) {
-        double r = residual(g, q, qq, q0, q1, next, null);
-        if (r < bestR) {
-          bestR = r;
-          best = g;
-        }
-      }
-      if (best < 0) {
-        return null;
-      }
-      for (int step : new int[] {COARSE / 5, 1}) {
-        int centre = best;
-        for (int g = Math.max(0, centre - 5 * step); g <= Math.min(count - 1, centre + 5 * step); g += step) {
-          double r = g == centre ? bestR : residual(g, q, qq, q0, q1, next, null);
-          if (r < bestR) {
-            bestR = r;
-            best = g;
-          }
-        }
-      }
-      double pos = best;
-      if (best > 0 && best < count - 1) {
-        // the vertex of the parabola through the best onset and its neighbours
-        double rm = residual(best - 1, q, qq, q0, q1, next, null);
-        double rp = residual(best + 1, q, qq, q0, q1, next, null);
-        double den = rm - 2 * bestR + rp;
-        if (den > 0) {
-          pos += Math.max(-0.5, Math.min(0.5, 0.5 * (rm - rp) / den));
-        }
-      }
-      double[] coef = new double[TERMS];
-      residual(best, q, qq, q0, q1, next, coef);
-      double spike = coef[2] * (order == Order.GRADIENT ? SLOPE_SPIKE / Math.sqrt(sigma) : BEND_SPIKE / (sigma * Math.sqrt(sigma)));
-      return new Profiles.Located(lo + pos * GRID, spike, FWHM_PER_SIGMA * sigma);
-    }
-
-    private double residual(int g, double[] q, double qq, double q0, double q1, double next, double[] coef) {
-      double[] t = rise[g];
-      double[] u = term2[g];
-      double q2 = 0;
-      double q3 = 0;
-      for (int j = 0; j < n; j++) {
-        q2 += t[j] * q[j];
-        q3 += u[j] * q[j];
-      }
-      if (Double.isNaN(next)) {
-        double[] inv = inverse[g];
-        if (inv == null) {
-          return Double.POSITIVE_INFINITY;
-        }
-        double r = qq;
-        for (int a = 0; a < TERMS; a++) {
-          int i = a * TERMS;
-          double c = inv[i] * q0 + inv[i + 1] * q1 + inv[i + 2] * q2 + inv[i + 3] * q3;
-          r -= c * (a == 0 ? q0 : a == 1 ? q1 : a == 2 ? q2 : q3);
-          if (coef != null) {
-            coef[a] = c;
-          }
-        }
-        return r;
-      }
-      // the two terms in the given proportion: one column T + next U (Cramer's rule on 3 x 3)
-      double[] sg = sums[g];
-      double a02 = sg[0] + next * sg[1];
-      double a12 = sg[2] + next * sg[3];
-      double a22 = sg[4] + 2 * next * sg[5] + next * next * sg[6];
-      double v2 = q2 + next * q3;
-      double a00 = n;
-      double a01 = sumJ;
-      double a11 = sumJJ;
-      double det = a00 * (a11 * a22 - a12 * a12) - a01 * (a01 * a22 - a12 * a02) + a02 * (a01 * a12 - a11 * a02);
-      if (!(Math.abs(det) > 1e-300)) {
-        return Double.POSITIVE_INFINITY;
-      }
-      double x0 = (q0 * (a11 * a22 - a12 * a12) - a01 * (q1 * a22 - a12 * v2) + a02 * (q1 * a12 - a11 * v2)) / det;
-      double x1 = (a00 * (q1 * a22 - a12 * v2) - q0 * (a01 * a22 - a12 * a02) + a02 * (a01 * v2 - q1 * a02)) / det;
-      double x2 = (a00 * (a11 * v2 - q1 * a12) - a01 * (a01 * v2 - q1 * a02) + q0 * (a01 * a12 - a11 * a02)) / det;
-      if (coef != null) {
-        coef[0] = x0;
-        coef[1] = x1;
-        coef[2] = x2;
-        coef[3] = next * x2;
-      }
-      return qq - x0 * q0 - x1 * q1 - x2 * v2;
-    }
-
-  }
-
-  /** The inverse of a symmetric matrix, row-major, by elimination against the identity; null when singular. */
-  private static double[] invert(double[][] m) {
-    int k = m.length;
-    double[] out = new double[k * k];
-    for (int c = 0; c < k; c++) {
-      double[][] a = new double[k][];
-      for (int r = 0; r < k; r++) {
-        a[r] = m[r].clone();
-      }
-      double[] e = new double[k];
-      e[c] = 1;
-      double[] x = solve(a, e);
-      if (x == null) {
-        return null;
-      }
-      for (int r = 0; r < k; r++) {
-        out[r * k + c] = x[r];
-      }
-    }
-    return out;
-  }
-
   /** Full width at half maximum of a Gaussian over its sigma, 2 sqrt(2 ln 2). */
-  private static final double FWHM_PER_SIGMA = 2 * Math.sqrt(2 * Math.log(2));
+  static final double FWHM_PER_SIGMA = 2 * Math.sqrt(2 * Math.log(2));
 }

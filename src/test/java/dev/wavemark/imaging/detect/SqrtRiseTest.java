@@ -33,11 +33,11 @@ class SqrtRiseTest {
    */
   private static final double APEX_TOL_PX = 0.05;
   /**
-   * Onset with the d^(3/2) term's share fixed by similarity, px: the mean profile's fitted share
-   * takes in a little of the terms beyond, a few per cent of the share (a few thousandths of a
-   * pixel here).
+   * Onset with the d^(3/2) term's share read from stretches of the shock, px: away from the apex
+   * the share changes by a few per cent over a stretch, which moves the onset by thousandths of a
+   * pixel.
    */
-  private static final double SIMILAR_TOL_PX = 0.01;
+  private static final double STRETCH_TOL_PX = 0.01;
 
   /** Unit normal density and its first two derivatives. */
   private static double g(double y, int derivative) {
@@ -180,35 +180,47 @@ class SqrtRiseTest {
     }
   }
 
+  /** A schlieren profile across the shock at s px from the apex of a 30 degree cone shock. */
+  private static double[] coneProfile(double s, double sigma) {
+    // the shell's radius s sin 30 deg; a density slope behind the shock of 0.02 of the jump per
+    // px at 70 px from the apex, falling as 1 / s; the rise towards decreasing index
+    return profile(0.4, sigma, 0.5 * s, 0.02 * 70 / s, 1, -1);
+  }
+
   /**
-   * Conical similarity (the field depends on the angle from the apex only): along a 30 degree
+   * A cone's field is conical (it depends on the angle from the apex only): along a 30 degree
    * shock the shell's radius is R = s sin 30 deg and the density slope behind it falls as 1 / s,
-   * so the d^(3/2) term's share falls as 1 / s. The constant read from the mean of the profiles
-   * ({@link Measure#similarity}) gives each profile's share, and with it fixed the onset is found
-   * along the whole shock, from 60 px off the apex (R = 30 px) to 900 px.
+   * so the d^(3/2) term's share changes slowly along the shock and can be read from the mean of a
+   * stretch of profiles and interpolated between stretches ({@link Measure.Cone}). With the share
+   * so fixed each profile's onset is found to a hundredth of a pixel from 135 px off the apex
+   * (R = 67 px) to 925 px; nearer the apex, where the share changes by half over a stretch and
+   * the terms beyond d^(3/2) matter, to the apex tolerance.
    */
   @Test
-  void similarityFromTheMeanProfileHoldsAlongTheShock() {
+  void shareReadOnStretchesHoldsBetweenThem() {
     double sigma = 1.5;
-    double[] s = {60, 80, 110, 150, 200, 280, 400, 600, 900};
-    double[][] p = new double[s.length][];
-    double[] mean = new double[N];
-    for (int i = 0; i < s.length; i++) {
-      // schlieren, the rise towards decreasing index; a density slope of 0.02 per px at 70 px
-      p[i] = profile(0.4, sigma, 0.5 * s[i], 0.02 * 70 / s[i], 1, -1);
-      for (int j = 0; j < N; j++) {
-        mean[j] += p[i][j] / s.length;
+    double half = 0.5 * Measure.SHARE_STRETCH * Measure.NORMAL_STEP_PX;
+    double[] centres = {60, 110, 160, 400, 450, 900, 950};
+    double[] share = new double[centres.length];
+    for (int c = 0; c < centres.length; c++) {
+      double[] mean = new double[N];
+      for (double at : new double[] {-half, -half / 3, half / 3, half}) {
+        double[] p = coneProfile(centres[c] + at, sigma);
+        for (int j = 0; j < N; j++) {
+          mean[j] += p[j] / 4;
+        }
       }
+      SqrtRise.Fit f = SqrtRise.fit(mean, SqrtRise.Order.GRADIENT, -1, sigma / STEP_PX, LO, HI);
+      assertNotNull(f);
+      share[c] = f.next();
     }
-    SqrtRise.Fit f = SqrtRise.fitSmear(mean, SqrtRise.Order.GRADIENT, STEP_PX, LO, HI, -1);
-    assertNotNull(f);
-    double kappa = Measure.similarity(f.next(), s);
-    assertTrue(kappa > 0, "the density rising inward and the chord's curvature: kappa " + kappa);
-    SqrtRise.Template t = SqrtRise.template(SqrtRise.Order.GRADIENT, -1, f.sigma(), N, LO, HI);
-    for (int i = 0; i < s.length; i++) {
-      Profiles.Located l = t.locate(p[i], kappa / s[i]);
+    SqrtRiseTemplate t = SqrtRise.template(SqrtRise.Order.GRADIENT, -1, sigma / STEP_PX, N, LO, HI);
+    Measure.Cone cone = new Measure.Cone(t, -1, centres, share);
+    for (double s : new double[] {50, 85, 135, 425, 925}) {
+      Profiles.Located l = t.locate(coneProfile(s, sigma), cone.shareAt(s));
       assertNotNull(l);
-      assertEquals(0.4, l.centre() * STEP_PX - HALF_PX, SIMILAR_TOL_PX, "onset at " + s[i] + " px from the apex");
+      double tol = s < 100 ? APEX_TOL_PX : STRETCH_TOL_PX;
+      assertEquals(0.4, l.centre() * STEP_PX - HALF_PX, tol, "onset at " + s + " px from the apex");
     }
   }
 }
