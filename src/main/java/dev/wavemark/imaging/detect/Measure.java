@@ -231,10 +231,10 @@ final class Measure {
       if (used < SHARE_STRETCH / 4) {
         continue;
       }
-      SqrtRise.Fit g = SqrtRise.fit(acc, order(sig), f.tail(), f.sigma(), lo, hi);
-      if (g != null && Double.isFinite(g.next())) {
+      double r = t.share(acc);
+      if (Double.isFinite(r)) {
         along[n] = sum / used;
-        share[n] = g.next();
+        share[n] = r;
         n++;
       }
     }

@@ -146,8 +146,9 @@ final class SqrtRise {
   /**
    * Fits q_j = a + b j + c T(z_j) + e U(z_j), z_j = tail (j - x0) / sigma, by least squares: T the
    * smeared sqrt rise's derivative of the picture's order, U the same of its d^(3/2) term. The
-   * onset x0 is searched in [lo, hi] on a grid of whole samples, then by golden section (the
-   * smear is at least a sample, so the residual has one minimum within a sample of the grid's).
+   * onset x0 is searched in [lo, hi] on a grid of half smears (a sample at the least), then by
+   * golden section (the residual's trough is a smear wide, so its minimum lies within a step of
+   * the grid's).
    *
    * @param tail +1 when the rise lies towards increasing index, -1 the other way
    * @param sigma smear, samples
@@ -160,7 +161,8 @@ final class SqrtRise {
     }
     double best = Double.POSITIVE_INFINITY;
     double bx = lo;
-    for (double x = lo; x <= hi; x += 1) {
+    double step = Math.max(1, 0.5 * sigma);
+    for (double x = lo; x <= hi; x += step) {
       double r = residual(q, order, tail, sigma, x, null);
       if (r < best) {
         best = r;
@@ -168,8 +170,8 @@ final class SqrtRise {
       }
     }
     // golden section on the bracket around the best grid point
-    double a = Math.max(lo, bx - 1);
-    double b = Math.min(hi, bx + 1);
+    double a = Math.max(lo, bx - step);
+    double b = Math.min(hi, bx + step);
     double gr = 0.5 * (Math.sqrt(5) - 1);
     double c = b - gr * (b - a);
     double d = a + gr * (b - a);
@@ -280,7 +282,7 @@ final class SqrtRise {
   /**
    * The smear and (unless given) the side of the tail that fit a (mean) profile best: smears from
    * {@link #MIN_SIGMA_PX} to {@link #MAX_SIGMA_PX} every {@link #SIGMA_STEP_PX} on each side, then
-   * golden section to a hundredth of a pixel about the best on its side.
+   * golden section to a hundredth of a pixel about the best of each side.
    *
    * @param samplePx spacing of the samples, px
    * @param tail +1 or -1 to fix the side of the tail, 0 to try both
@@ -289,20 +291,28 @@ final class SqrtRise {
   static Fit fitSmear(double[] q, Order order, double samplePx, int lo, int hi, int tail) {
     Fit best = null;
     for (int side = -1; side <= 1; side += 2) {
-      if (tail != 0 && side != tail) {
-        continue;
-      }
-      for (double s = MIN_SIGMA_PX; s <= MAX_SIGMA_PX + 1e-9; s += SIGMA_STEP_PX) {
-        Fit f = fit(q, order, side, s / samplePx, lo, hi);
+      if (tail == 0 || side == tail) {
+        Fit f = fitSmearOn(q, order, samplePx, lo, hi, side);
         if (f != null && (best == null || f.residual() < best.residual())) {
           best = f;
         }
       }
     }
+    return best;
+  }
+
+  /** {@link #fitSmear} on one side; null when the profile is too short. */
+  private static @org.jspecify.annotations.Nullable Fit fitSmearOn(double[] q, Order order, double samplePx, int lo, int hi, int side) {
+    Fit best = null;
+    for (double s = MIN_SIGMA_PX; s <= MAX_SIGMA_PX + 1e-9; s += SIGMA_STEP_PX) {
+      Fit f = fit(q, order, side, s / samplePx, lo, hi);
+      if (f != null && (best == null || f.residual() < best.residual())) {
+        best = f;
+      }
+    }
     if (best == null) {
       return null;
     }
-    int side = best.tail();
     double a = Math.max(MIN_SIGMA_PX, best.sigma() * samplePx - SIGMA_STEP_PX);
     double b = Math.min(MAX_SIGMA_PX, best.sigma() * samplePx + SIGMA_STEP_PX);
     double gr = 0.5 * (Math.sqrt(5) - 1);

@@ -9,7 +9,7 @@ package dev.wavemark.imaging.detect;
 final class SqrtRiseTemplate {
   /** Spacing of the onsets laid out, samples. */
   static final double GRID = 0.1;
-  /** Onsets per coarse step of the search (a sample). */
+  /** Onsets per coarse step of the search at the least (a sample). */
   private static final int COARSE = 10;
 
   private final int n;
@@ -80,8 +80,25 @@ final class SqrtRiseTemplate {
    * @param next the d^(3/2) term's coefficient over the leading term's, or NaN to fit it freely
    */
   Profiles.Located locate(double[] q, double next) {
-    if (q.length != n) {
+    double[] coef = new double[SqrtRise.TERMS];
+    double pos = search(q, next, coef);
+    if (Double.isNaN(pos)) {
       return null;
+    }
+    double spike = coef[2] * (order == SqrtRise.Order.GRADIENT ? SqrtRise.SLOPE_SPIKE / Math.sqrt(sigma) : SqrtRise.BEND_SPIKE / (sigma * Math.sqrt(sigma)));
+    return new Profiles.Located(lo + pos * GRID, spike, SqrtRise.FWHM_PER_SIGMA * sigma);
+  }
+
+  /** The d^(3/2) term's coefficient over the leading term's, both fitted freely; NaN when the profile does not fit. */
+  double share(double[] q) {
+    double[] coef = new double[SqrtRise.TERMS];
+    return Double.isNaN(search(q, Double.NaN, coef)) ? Double.NaN : coef[3] / coef[2];
+  }
+
+  /** The best onset (fractional index into the laid-out onsets, NaN if none) and its coefficients into coef. */
+  private double search(double[] q, double next, double[] coef) {
+    if (q.length != n) {
+      return Double.NaN;
     }
     double qq = 0;
     double q0 = 0;
@@ -94,9 +111,9 @@ final class SqrtRiseTemplate {
     int count = inverse.length;
     int best = -1;
     double bestR = Double.POSITIVE_INFINITY;
-    // a whole sample apart (the residual's trough is a smear wide, a sample or more), then
-    // narrowing steps about the best
-    for (int g = 0; g < count; g += COARSE) {
+    // half a smear apart (the residual's trough is a smear wide), then halving steps about the best
+    int coarse = Math.max(COARSE, (int) Math.round(0.5 * sigma / GRID));
+    for (int g = 0; g < count; g += coarse) {
       double r = residual(g, q, qq, q0, q1, next, null);
       if (r < bestR) {
         bestR = r;
@@ -104,15 +121,17 @@ final class SqrtRiseTemplate {
       }
     }
     if (best < 0) {
-      return null;
+      return Double.NaN;
     }
-    for (int step : new int[] {COARSE / 5, 1}) {
+    for (int step = coarse / 2; step >= 1; step = step == 1 ? 0 : (step + 1) / 2) {
       int centre = best;
-      for (int g = Math.max(0, centre - 5 * step); g <= Math.min(count - 1, centre + 5 * step); g += step) {
-        double r = g == centre ? bestR : residual(g, q, qq, q0, q1, next, null);
-        if (r < bestR) {
-          bestR = r;
-          best = g;
+      for (int g : new int[] {centre - step, centre + step}) {
+        if (g >= 0 && g < count) {
+          double r = residual(g, q, qq, q0, q1, next, null);
+          if (r < bestR) {
+            bestR = r;
+            best = g;
+          }
         }
       }
     }
@@ -126,10 +145,8 @@ final class SqrtRiseTemplate {
         pos += Math.max(-0.5, Math.min(0.5, 0.5 * (rm - rp) / den));
       }
     }
-    double[] coef = new double[SqrtRise.TERMS];
     residual(best, q, qq, q0, q1, next, coef);
-    double spike = coef[2] * (order == SqrtRise.Order.GRADIENT ? SqrtRise.SLOPE_SPIKE / Math.sqrt(sigma) : SqrtRise.BEND_SPIKE / (sigma * Math.sqrt(sigma)));
-    return new Profiles.Located(lo + pos * GRID, spike, SqrtRise.FWHM_PER_SIGMA * sigma);
+    return pos;
   }
 
   private double residual(int g, double[] q, double qq, double q0, double q1, double next, double[] coef) {
