@@ -16,7 +16,8 @@ package dev.wavemark.imaging.detect;
  * its slope sqrt(2 R) d^(3/2) to the chord integral), and the distance from the apex growing along
  * the shock's normal all enter there, each relative to the leading term as d / R. With the window
  * a tenth or more of R near the apex, leaving it out moves the onset by tenths of a pixel there
- * and so turns the fitted line; it is fitted with its own free coefficient.
+ * and so turns the fitted line. Its coefficient is fitted freely on a mean profile; for single
+ * profiles {@link Measure} fixes its share from the mean of their stretch of the shock.
  *
  * <p>With S(x) = integral over t > 0 of sqrt(t) g(x - t) dt for the unit normal density g, the
  * substitution t = u^2 gives S(x) = integral of 2 u^2 g(x - u^2) du, S'(x) = integral of
