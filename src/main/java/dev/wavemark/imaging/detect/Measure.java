@@ -41,7 +41,7 @@ final class Measure {
    *     finding where other waves meet this one in the frame)
    * @param amplitude mean signed signature amplitude (frame units)
    * @param widthPx mean apparent width across the line
-   * @param sign the sign used (PEAK/STEP) or the polarity (DIPOLE)
+   * @param sign the sign used (PEAK/STEP), the polarity (DIPOLE) or the side of the tail (ROOT_SPIKE, ROOT_PAIR)
    */
   record Result(LineFit.Result fit, LineFit.Result distortedFit, double amplitude, double widthPx, int sign) {}
 
@@ -109,9 +109,19 @@ final class Measure {
     for (int j = 0; j < m; j++) {
       mean[j] /= valid;
     }
-    int sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
     int lo = m / 6;
     int hi = m - 1 - m / 6;
+    int sign;
+    Cone cone = null;
+    if (sig.onset()) {
+      cone = cone(mean, prof, c, sig, fixedSign, lo, hi);
+      if (cone == null) {
+        return null;
+      }
+      sign = cone.tail();
+    } else {
+      sign = fixedSign != 0 ? fixedSign : dominantSign(mean, sig);
+    }
     int maxSep = (int) Math.round(1.4 * halfWindowPx / SAMPLE_PX);
     // the noise of a located signature: the raw noise for lines and pairs; for steps, that of the
     // difference of two means over a quarter of the profile (a quarter window, in px, of
@@ -119,7 +129,8 @@ final class Measure {
     double noiseSig = sig == Signature.STEP ? noise * Math.sqrt(2 / Math.max(1, 0.5 * halfWindowPx)) : noise;
     // average G neighbouring profiles so that each located centre stands about 8 noise
     // deviations above zero (a faint wave gives fewer, better points instead of many bad ones)
-    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep);
+    SqrtRiseTemplate onset = cone == null ? null : cone.template();
+    Profiles.Located ml = locate(mean, sig, sign, lo, hi, maxSep, onset, Double.NaN);
     int half = Math.max(2, m / 4);
     Profiles.Kink kink = null;
     // the 1/s the mean profile's kink stands for: its profiles' jumps fall as 1/s, so it is the
@@ -162,11 +173,11 @@ final class Measure {
       if (prof[k] == null) {
         continue;
       }
-      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep);
+      double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
+      Profiles.Located l = locate(prof[k], sig, sign, lo, hi, maxSep, onset, cone == null ? Double.NaN : cone.shareAt(s));
       if (l == null || !(Math.abs(l.amplitude()) >= MIN_PROFILE_SNR * noiseSig)) {
         continue;
       }
-      double s = c.s0() + (k + 0.5 * (group - 1) / group) * step;
       double centre = l.centre();
       if (kink != null) {
         double bias = Profiles.stepKinkBias(m, sign, fanSide, centre, kink.blur(), kink.slope() / (s * invRef), lo, hi, half);
@@ -256,6 +267,78 @@ final class Measure {
     return n % 2 == 1 ? v[n / 2] : 0.5 * (v[n / 2 - 1] + v[n / 2]);
   }
 
+  /** Normals per stretch of a cone's shock over which the d^(3/2) term's share is read. */
+  static final int SHARE_STRETCH = 50;
+
+  /**
+   * A cone's shock template and the side of its tail, with the d^(3/2) term's share read on
+   * stretches of the shock (distance from the origin, px, and share; empty when none could be read).
+   */
+  record Cone(SqrtRiseTemplate template, int tail, double[] along, double[] share) {
+    /** The share at distance s along the shock, linear between the stretches; NaN (free) when none. */
+    double shareAt(double s) {
+      int n = along.length;
+      if (n == 0) {
+        return Double.NaN;
+      }
+      if (s <= along[0] || n == 1) {
+        return share[0];
+      }
+      for (int i = 1; i < n; i++) {
+        if (s <= along[i]) {
+          double f = (s - along[i - 1]) / (along[i] - along[i - 1]);
+          return share[i - 1] + f * (share[i] - share[i - 1]);
+        }
+      }
+      return share[n - 1];
+    }
+  }
+
+  /**
+   * A cone's smear (shock thickness and blur) and the side its tail lies on, read from the mean
+   * profile (whose noise is one profile's over the number of them), and the d^(3/2) term's share
+   * from the mean of each stretch of {@link #SHARE_STRETCH} normals: the field is conical, so the
+   * share changes only slowly with the distance from the apex (as 1 / s to first order, but the
+   * terms beyond bend that near the apex), and a profile's own fit of it would add its noise to
+   * the onset. Null when the mean profile is too short to fit.
+   */
+  private static @org.jspecify.annotations.Nullable Cone cone(double[] mean, double[][] prof, Candidate c, Signature sig,
+      int fixedSign, int lo, int hi) {
+    SqrtRise.Fit f = SqrtRise.fitSmear(mean, order(sig), SAMPLE_PX, lo, hi, fixedSign);
+    if (f == null) {
+      return null;
+    }
+    SqrtRiseTemplate t = SqrtRise.template(order(sig), f.tail(), f.sigma(), mean.length, lo, hi);
+    int stretches = (prof.length + SHARE_STRETCH - 1) / SHARE_STRETCH;
+    double[] along = new double[stretches];
+    double[] share = new double[stretches];
+    int n = 0;
+    for (int b = 0; b < stretches; b++) {
+      double[] acc = new double[mean.length];
+      double sum = 0;
+      int used = 0;
+      for (int k = b * SHARE_STRETCH; k < Math.min(prof.length, (b + 1) * SHARE_STRETCH); k++) {
+        if (prof[k] != null) {
+          for (int j = 0; j < acc.length; j++) {
+            acc[j] += prof[k][j];
+          }
+          sum += c.s0() + k * NORMAL_STEP_PX;
+          used++;
+        }
+      }
+      if (used < SHARE_STRETCH / 4) {
+        continue;
+      }
+      double r = t.share(acc);
+      if (Double.isFinite(r)) {
+        along[n] = sum / used;
+        share[n] = r;
+        n++;
+      }
+    }
+    return new Cone(t, f.tail(), java.util.Arrays.copyOf(along, n), java.util.Arrays.copyOf(share, n));
+  }
+
   /** Means of consecutive runs of {@code g} profiles; a run with a missing profile is dropped. */
   private static double[][] grouped(double[][] prof, int g) {
     int n = prof.length / g;
@@ -286,12 +369,25 @@ final class Measure {
     return out;
   }
 
-  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep) {
+  /**
+   * The centre of one profile.
+   *
+   * @param onset a cone's shock template, its smear and side fitted to the mean profile (ROOT_SPIKE,
+   *     ROOT_PAIR; ignored otherwise)
+   * @param next a cone's d^(3/2) term over its leading term at this profile, NaN to fit it freely
+   */
+  static Profiles.Located locate(double[] p, Signature sig, int sign, int lo, int hi, int maxSep,
+      @org.jspecify.annotations.Nullable SqrtRiseTemplate onset, double next) {
     return switch (sig) {
       case PEAK -> Profiles.peak(Profiles.detrend(p, 3), sign, lo, hi);
       case STEP -> Profiles.step(p, sign, lo, hi, Math.max(2, p.length / 4));
       case DIPOLE -> Profiles.pairCentre(Profiles.detrend(p, 3), sign, lo, hi, maxSep);
+      case ROOT_SPIKE, ROOT_PAIR -> onset == null ? null : onset.locate(p, next);
     };
+  }
+
+  private static SqrtRise.Order order(Signature sig) {
+    return sig == Signature.ROOT_PAIR ? SqrtRise.Order.CURVATURE : SqrtRise.Order.GRADIENT;
   }
 
   /** The sign of the mean profile's signature: the sign of its largest excursion. */
@@ -299,7 +395,7 @@ final class Measure {
     double[] q = switch (sig) {
       case PEAK -> Profiles.detrend(mean, 3);
       case STEP -> Profiles.detrend(Profiles.derivative(mean), 3);
-      case DIPOLE -> Profiles.detrend(mean, 3);
+      case DIPOLE, ROOT_SPIKE, ROOT_PAIR -> Profiles.detrend(mean, 3);
     };
     if (sig == Signature.DIPOLE) {
       Profiles.Located l = Profiles.zeroCrossing(q, 0, q.length - 1, q.length);

@@ -313,8 +313,11 @@ public final class WaveDetector {
       if (h == null) {
         return out;
       }
-      Measure.Result m = measureAlong(ctx, scan, h.index(), ctx.shadow() ? Signature.DIPOLE : Signature.PEAK,
-          ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX, ORIGIN_SKIP_PX, Double.POSITIVE_INFINITY, clip);
+      // a cone's shock is the onset of a square-root rise, not a symmetric line or pair
+      Signature sig = s.kind() == WaveKind.CONICAL_SHOCK ? (ctx.shadow() ? Signature.ROOT_PAIR : Signature.ROOT_SPIKE)
+          : ctx.shadow() ? Signature.DIPOLE : Signature.PEAK;
+      Measure.Result m = measureAlong(ctx, scan, h.index(), sig, ctx.shadow() ? SHADOW_WINDOW_PX : SHOCK_WINDOW_PX,
+          ORIGIN_SKIP_PX, Double.POSITIVE_INFINITY, clip);
       if (m != null) {
         out.add(new Found(s.kind(), s.side(), s.feature(), m, s.origin()));
       }
