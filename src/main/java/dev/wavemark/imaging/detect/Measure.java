@@ -42,8 +42,9 @@ final class Measure {
    * @param amplitude mean signed signature amplitude (frame units)
    * @param widthPx mean apparent width across the line
    * @param sign the sign used (PEAK/STEP), the polarity (DIPOLE) or the side of the tail (ROOT_SPIKE, ROOT_PAIR)
+   * @param kinkBlur a fan boundary's fitted kinked-step blur (samples), NaN when none was fitted
    */
-  record Result(LineFit.Result fit, LineFit.Result distortedFit, double amplitude, double widthPx, int sign) {}
+  record Result(LineFit.Result fit, LineFit.Result distortedFit, double amplitude, double widthPx, int sign, double kinkBlur) {}
 
   /**
    * Measures the wave of the given signature near a candidate.
@@ -74,6 +75,16 @@ final class Measure {
    */
   static Result measure(Raster full, Candidate c, Signature sig, double halfWindowPx, int fixedSign, double noise,
       UnaryOperator<Point2> undistort, int minSupport, int fanSide) {
+    return measure(full, c, sig, halfWindowPx, fixedSign, noise, undistort, minSupport, fanSide, Double.NaN);
+  }
+
+  /**
+   * As {@link #measure(Raster, Candidate, Signature, double, int, double, UnaryOperator, int, int)},
+   * a fan boundary's kinked step searched near {@code blurHint} (samples; a first pass's
+   * {@link Result#kinkBlur}) instead of over every blur, when it is finite.
+   */
+  static Result measure(Raster full, Candidate c, Signature sig, double halfWindowPx, int fixedSign, double noise,
+      UnaryOperator<Point2> undistort, int minSupport, int fanSide, double blurHint) {
     int m = (int) Math.round(2 * halfWindowPx / SAMPLE_PX) + 1;
     int count = (int) Math.floor((c.s1() - c.s0()) / NORMAL_STEP_PX) + 1;
     if (count < minSupport) {
@@ -139,7 +150,7 @@ final class Measure {
     // the ray displacement on the fan's side as alpha / s, px
     double alpha = Double.NaN;
     if (fanSide != 0 && sig == Signature.STEP) {
-      kink = Profiles.kinkFit(mean, sign, fanSide, lo, hi, half);
+      kink = Profiles.kinkFit(mean, sign, fanSide, lo, hi, half, blurHint);
       double w1 = 0;
       double w2 = 0;
       for (int k = 0; k < prof.length; k++) {
@@ -166,6 +177,7 @@ final class Measure {
     double[] ys = new double[count];
     double[] dx = new double[count];
     double[] dy = new double[count];
+    java.util.Map<Long, Double> pulls = new java.util.HashMap<>();
     int n = 0;
     double ampSum = 0;
     double widthSum = 0;
@@ -180,7 +192,18 @@ final class Measure {
       }
       double centre = l.centre();
       if (kink != null) {
-        double bias = Profiles.stepKinkBias(m, sign, fanSide, centre, kink.blur(), kink.slope() / (s * invRef), lo, hi, half);
+        double slope = kink.slope() / (s * invRef);
+        // the pull depends on the centre only through its phase on the samples (the profiles
+        // centre within a sample or two of the window's middle) and smoothly on the slope: it is
+        // evaluated for eighths of a sample in phase and at slopes 10 % apart, linearly between
+        double phase = centre - Math.floor(centre);
+        int pb = (int) Math.round(phase * 8);
+        double u = Math.log(Math.abs(slope) + 1e-12) / Math.log(1.1);
+        int j = (int) Math.floor(u);
+        double f = u - j;
+        double b0 = pull(pulls, m, sign, fanSide, pb, j, slope < 0, kink.blur(), lo, hi, half);
+        double b1 = pull(pulls, m, sign, fanSide, pb, j + 1, slope < 0, kink.blur(), lo, hi, half);
+        double bias = b0 + f * (b1 - b0);
         centre -= Double.isFinite(bias) ? bias : 0;
       } else if (Double.isFinite(alpha)) {
         // the true boundary lies half the displacement from the line, towards the fan when light
@@ -216,7 +239,7 @@ final class Measure {
     if (fit == null) {
       return null;
     }
-    return new Result(fit, distorted, ampSum / n, widthSum / n, sign);
+    return new Result(fit, distorted, ampSum / n, widthSum / n, sign, kink == null ? Double.NaN : kink.blur());
   }
 
   /**
@@ -265,6 +288,24 @@ final class Measure {
     java.util.Arrays.sort(v);
     int n = v.length;
     return n % 2 == 1 ? v[n / 2] : 0.5 * (v[n / 2 - 1] + v[n / 2]);
+  }
+
+  /**
+   * A fan boundary's pull at phase {@code pb} / 8 of a sample and slope -+1.1^j (see
+   * {@link Profiles#stepKinkBias}), from {@code cache} or evaluated once on a model centred in
+   * the window.
+   */
+  private static double pull(java.util.Map<Long, Double> cache, int m, int sign, int fanSide, int pb, int j, boolean negative,
+      double blur, int lo, int hi, int half) {
+    long key = (((long) j + 100_000) * 16 + pb) * 2 + (negative ? 1 : 0);
+    Double known = cache.get(key);
+    if (known != null) {
+      return known;
+    }
+    double slope = (negative ? -1 : 1) * Math.pow(1.1, j);
+    double v = Profiles.stepKinkBias(m, sign, fanSide, m / 2 + pb / 8.0, blur, slope, lo, hi, half);
+    cache.put(key, v);
+    return v;
   }
 
   /** Normals per stretch of a cone's shock over which the d^(3/2) term's share is read. */

@@ -155,21 +155,56 @@ final class Profiles {
    * @return null when no step is found or the fit is degenerate
    */
   static Kink kinkFit(double[] p, int sign, int fanSide, int lo, int hi, int half) {
+    return kinkFit(p, sign, fanSide, lo, hi, half, Double.NaN);
+  }
+
+  /**
+   * As {@link #kinkFit(double[], int, int, int, int, int)}, the coarse search over blurs left out
+   * when {@code blurHint} (samples) is finite: the fine search starts from it.
+   */
+  static Kink kinkFit(double[] p, int sign, int fanSide, int lo, int hi, int half, double blurHint) {
     Located box = step(p, sign, lo, hi, half);
     if (box == null) {
       return null;
     }
     double a = Math.max(lo, box.centre() - 4);
     double b = Math.min(hi, box.centre() + 4);
-    double[] best = null;
+    if (!(b > a)) {
+      return null;
+    }
+    // coarse to fine (the cost is smooth in both): blur every 20 % with the kink every sample,
+    // then blur every 6 % about the best with the kink every quarter sample within half a sample
+    // of its best, then the kink by golden section at the best blur
     double bestBlur = Double.NaN;
-    for (double blur = 0.6; blur <= 10.0 + 1e-9; blur *= 1.08) {
-      double[] f = bestKink(p, fanSide, box.centre(), a, b, blur);
-      if (f != null && (best == null || f[2] < best[2])) {
-        best = f;
-        bestBlur = blur;
+    double bestX = Double.NaN;
+    double bestCost = Double.POSITIVE_INFINITY;
+    boolean hinted = Double.isFinite(blurHint);
+    for (double blur = hinted ? blurHint : 0.6; blur <= (hinted ? blurHint : 10.0) + 1e-9; blur *= 1.2) {
+      for (double x = a; x <= b + 1e-9; x += 1.0) {
+        double c = kinkCost(p, x, blur, fanSide, null);
+        if (c < bestCost) {
+          bestCost = c;
+          bestX = x;
+          bestBlur = blur;
+        }
       }
     }
+    if (!(bestCost < Double.POSITIVE_INFINITY)) {
+      return null;
+    }
+    double b0 = bestBlur;
+    double x0 = bestX;
+    for (double blur = Math.max(0.6, b0 / 1.2); blur <= Math.min(10.0, b0 * 1.2) + 1e-9; blur *= 1.06) {
+      for (double x = Math.max(a, x0 - 0.5); x <= Math.min(b, x0 + 0.5) + 1e-9; x += 0.25) {
+        double c = kinkCost(p, x, blur, fanSide, null);
+        if (c < bestCost) {
+          bestCost = c;
+          bestX = x;
+          bestBlur = blur;
+        }
+      }
+    }
+    double[] best = bestKink(p, fanSide, bestX, Math.max(a, bestX - 0.25), Math.min(b, bestX + 0.25), bestBlur);
     if (best == null || !(sign * fanSide * best[1] > 0)) {
       return null;
     }
@@ -227,7 +262,8 @@ final class Profiles {
     double x2 = l + g * (r - l);
     double f1 = kinkCost(p, x1, blur, fanSide, null);
     double f2 = kinkCost(p, x2, blur, fanSide, null);
-    for (int it = 0; it < 24; it++) {
+    // 14 steps take the half-sample bracket below a thousandth of a sample
+    for (int it = 0; it < 14; it++) {
       if (f1 < f2) {
         r = x2;
         x2 = x1;

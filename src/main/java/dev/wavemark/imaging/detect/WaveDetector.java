@@ -460,6 +460,6 @@ public final class WaveDetector {
       }
     }
     return Measure.measure(ctx.full(), c2, sig, ctx.narrowSecondPass() ? secondWindow(sig, window, m.widthPx()) : window, m.sign(), ctx.noise(), ctx.undistort(),
-        minSupport, fanSide);
+        minSupport, fanSide, m.kinkBlur());
   }
 }
