@@ -236,10 +236,10 @@ final class Combiner {
     for (BudgetLine.Source src : List.of(BudgetLine.Source.ANGLE_FIT, BudgetLine.Source.FLOW_DIRECTION,
         BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA, BudgetLine.Source.STANDOFF, BudgetLine.Source.NOSE_RADIUS,
         BudgetLine.Source.CORRELATION, BudgetLine.Source.FAN_LOCATOR)) {
-      boolean onlyWhenUsed = src == BudgetLine.Source.STANDOFF || src == BudgetLine.Source.NOSE_RADIUS
-          || src == BudgetLine.Source.CORRELATION || src == BudgetLine.Source.FAN_LOCATOR;
-      if (onlyWhenUsed && inputs.stream().noneMatch(in -> in.source() == src)) {
-        continue; // the blunt-body lines only when a bow shock gave an estimate, the fan line only with a fan
+      if (inputs.stream().noneMatch(in -> in.source() == src)) {
+        // a source no estimate depends on has no line (a bow shock's run has no angle fit, flow
+        // direction or model angle; a run without a fan no fan-locator line)
+        continue;
       }
       double sumSq = 0;
       double sumIn = 0;

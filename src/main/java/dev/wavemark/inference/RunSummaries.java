@@ -80,9 +80,8 @@ final class RunSummaries {
     }
     for (BudgetLine.Source s : List.of(BudgetLine.Source.FLOW_DIRECTION, BudgetLine.Source.MODEL_ANGLE, BudgetLine.Source.GAMMA,
         BudgetLine.Source.NOSE_RADIUS, BudgetLine.Source.CORRELATION, BudgetLine.Source.FAN_LOCATOR)) {
-      if ((s == BudgetLine.Source.NOSE_RADIUS || s == BudgetLine.Source.CORRELATION || s == BudgetLine.Source.FAN_LOCATOR)
-          && with.stream().allMatch(f -> line(f, s).isEmpty())) {
-        continue; // blunt-body lines only for a blunt body's bow shock, the fan line only where fans were used
+      if (with.stream().allMatch(f -> line(f, s).isEmpty())) {
+        continue; // only the sources some frame's estimate depends on (see Combiner)
       }
       double c = 0;
       for (int i = 0; i < n; i++) {
