@@ -66,8 +66,13 @@ class OpticsGuessTest {
   void aRenderedWedgeIsGuessedFromItsTwoShocks(Optics truth, int edge, double snr, double rollDeg) {
     BodyShape wedge = new BodyShape.Wedge(Math.toRadians(10), 0, new Point2(150.4, 240.3), 180);
     RenderedCase c = RenderedCase.of("wedge", wedge, 2.2, truth, edge, 1.6, snr, Math.toRadians(rollDeg), 640, 480, 11);
-    OpticsGuess g = WaveDetector.guessOptics(c.frame(), FlowRegion.of(c.mask()), wedge, Math.toRadians(rollDeg));
-    assertEquals(2, g.lines(), g.toString());
+    assertGuess(c.frame(), c, wedge, Math.toRadians(rollDeg), 2, truth);
+  }
+
+  /** The guess from {@code frame} (the rendered case's mask) judges {@code lines} lines and names the true optics. */
+  private static void assertGuess(GrayF32 frame, RenderedCase c, BodyShape shape, double rollRad, int lines, Optics truth) {
+    OpticsGuess g = WaveDetector.guessOptics(frame, FlowRegion.of(c.mask()), shape, rollRad);
+    assertEquals(lines, g.lines(), g.toString());
     assertEquals(truth == Optics.SHADOWGRAPH, g.optics() == Optics.SHADOWGRAPH, g.toString());
   }
 
@@ -81,9 +86,7 @@ class OpticsGuessTest {
     for (int i = 0; i < q.data.length; i++) {
       q.data[i] = Math.round(127 * (1 + q.data[i])) / 127f - 1;
     }
-    OpticsGuess g = WaveDetector.guessOptics(q, FlowRegion.of(c.mask()), ramp, 0);
-    assertEquals(1, g.lines(), g.toString());
-    assertEquals(truth == Optics.SHADOWGRAPH, g.optics() == Optics.SHADOWGRAPH, g.toString());
+    assertGuess(q, c, ramp, 0, 1, truth);
   }
 
   /** An expansion corner has no shock: its fan is judged whole (zero net light across it in shadowgraph). */
@@ -92,9 +95,7 @@ class OpticsGuessTest {
   void anExpansionCornerIsGuessedFromItsWholeFan(Optics truth) {
     BodyShape corner = new BodyShape.ExpansionCorner(Math.toRadians(10), new Point2(250.6, 400), FLOOR);
     RenderedCase c = RenderedCase.of("corner", corner, 2.0, truth, 1, 1.4, 10, 0, 640, 480, 3);
-    OpticsGuess g = WaveDetector.guessOptics(c.frame(), FlowRegion.of(c.mask()), corner, 0);
-    assertEquals(1, g.lines(), g.toString());
-    assertEquals(truth == Optics.SHADOWGRAPH, g.optics() == Optics.SHADOWGRAPH, g.toString());
+    assertGuess(c.frame(), c, corner, 0, 1, truth);
   }
 
   @Test
