@@ -58,16 +58,21 @@ final class Frames {
     }
   }
 
+  /** About this many neighbour differences set the noise (its MAD then has a relative standard error near 0.5 %). */
+  static final int NOISE_SAMPLES = 1 << 16;
+
   /**
    * The pixel noise standard deviation: the MAD of horizontal neighbour differences over
-   * sqrt 2, on every fourth row of the flow region. Waves occupy few pixels, so the median
+   * sqrt 2, on rows of the flow region spread evenly so that about {@link #NOISE_SAMPLES} of
+   * them are taken (every row of a small frame). Waves occupy few pixels, so the median
    * ignores them.
    */
   static double noise(Raster r) {
-    int cap = (r.height / 4 + 1) * r.width;
+    int every = Math.max(1, (int) ((long) r.width * r.height / NOISE_SAMPLES));
+    int cap = (r.height / every + 1) * r.width;
     double[] d = new double[cap];
     int n = 0;
-    for (int y = 0; y < r.height; y += 4) {
+    for (int y = 0; y < r.height; y += every) {
       int row = y * r.width;
       for (int x = 0; x + 1 < r.width; x++) {
         if (r.flow[row + x] && r.flow[row + x + 1]) {
