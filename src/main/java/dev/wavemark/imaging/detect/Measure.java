@@ -266,12 +266,13 @@ final class Measure {
     if (n == 0) {
       return Double.NaN;
     }
-    double med = median(java.util.Arrays.copyOf(as, n));
+    double med = LineFit.medianInPlace(java.util.Arrays.copyOf(as, n), n);
     double[] dev = new double[n];
     for (int i = 0; i < n; i++) {
       dev[i] = Math.abs(as[i] - med);
     }
-    double mad = median(dev);
+    // a copy's median: dev itself is read below, profile by profile
+    double mad = LineFit.medianAbs(dev, n);
     double num = 0;
     double den = 0;
     for (int i = 0; i < n; i++) {
@@ -282,12 +283,6 @@ final class Measure {
       }
     }
     return den > 0 ? num / den : med;
-  }
-
-  private static double median(double[] v) {
-    java.util.Arrays.sort(v);
-    int n = v.length;
-    return n % 2 == 1 ? v[n / 2] : 0.5 * (v[n / 2 - 1] + v[n / 2]);
   }
 
   /**

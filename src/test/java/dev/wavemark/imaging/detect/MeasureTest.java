@@ -66,4 +66,22 @@ class MeasureTest {
     // profiles run from the low- to the high-density side here, so the dark lobe comes first
     assertEquals(1, m.sign(), "polarity: dark lobe upstream");
   }
+
+  @Test
+  void aCrossingWaveDoesNotSetAShadowgraphFansDisplacement() {
+    // the ray displacement of a centred fan's boundary falls as 1/s (geometric optics: the
+    // deflection is the density gradient, which falls as 1/s across a centred fan), so each
+    // profile's light area times s is one constant alpha; 30 of 200 profiles where another wave
+    // crosses carry five times their share and must be left out
+    double alpha = 3.0;
+    int m = 49;
+    double s0 = 40;
+    double[][] prof = new double[200][];
+    for (int k = 0; k < prof.length; k++) {
+      double s = s0 + k * Measure.NORMAL_STEP_PX;
+      prof[k] = new double[m];
+      prof[k][m / 2] = alpha / (Measure.SAMPLE_PX * s) * (k >= 50 && k < 80 ? 5 : 1);
+    }
+    assertEquals(alpha, Measure.displacementScale(prof, s0), 1e-9 * alpha);
+  }
 }
